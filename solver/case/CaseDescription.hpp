@@ -1,0 +1,167 @@
+#pragma once
+//! \file CaseDescription.hpp
+//! The validated content of a case file, in SI units. The case reader (solver/input/)
+//! produces it; the network assembly (solver/components/) consumes it. Nothing past the
+//! reader sees units or YAML; every position in the file travels along as a SourceMark so
+//! that assembly errors can still point at the line that caused them.
+
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace coldtip {
+
+//! A place in a case file: 1-based line and column, and the key path
+//! (`components[3].fill.wire_diameter`). Empty path means "the whole file".
+struct SourceMark {
+    std::string file;
+    int line = 0;
+    int column = 0;
+    std::string path;
+};
+
+//! Working gas and the charge that fills the machine.
+struct GasSpec {
+    std::string species = "helium";  //!< helium | nitrogen | neon | argon
+    double charge_pressure = 0.0;    //!< [Pa] pressure when filled at charge_temperature
+    double charge_temperature = 0.0; //!< [K]
+    SourceMark mark;
+};
+
+//! A thermal boundary with a given temperature and film coefficient (used by the drive's
+//! compression space; heat exchangers compute their own film coefficient).
+struct FilmWallSpec {
+    double temperature = 0.0;               //!< [K]
+    double heat_transfer_coefficient = 0.0; //!< [W/(m^2 K)]
+};
+
+//! Prescribed sinusoidal piston: x(t) = amplitude sin(2 pi f t), positive into the cylinder.
+//! Compression-space volume V(t) = dead_volume + A_p (amplitude - x(t)), A_p = pi bore^2/4.
+struct DriveSpec {
+    std::string kind = "piston";
+    double bore = 0.0;        //!< [m]
+    double amplitude = 0.0;   //!< [m] stroke amplitude (half the stroke)
+    double dead_volume = 0.0; //!< [m^3] volume at full compression
+    std::optional<FilmWallSpec> wall; //!< absent: adiabatic compression space
+    SourceMark mark;
+};
+
+//! What fills a flow passage (heat exchanger or regenerator).
+struct FillSpec {
+    enum class Kind { Open, Slots, Screen, Spheres };
+    Kind kind = Kind::Open;
+    std::string material;            //!< matrix material (screen, spheres); may be empty for slots
+    double porosity = 0.0;           //!< [-] screens: derived from mesh and wire if not given
+    double hydraulic_diameter = 0.0; //!< [m] slots: given; screens, spheres: derived
+    double mesh = 0.0;               //!< [1/m] screens: wires per unit length
+    double wire_diameter = 0.0;      //!< [m] screens
+    double sphere_diameter = 0.0;    //!< [m] spheres
+    double conduction_degradation = 0.1; //!< [-] k_eff/((1-phi) k_s), Lewis et al. (1998)
+    SourceMark mark;
+};
+
+//! The thermal side of a component's wall.
+//!  - Adiabatic: no heat exchange with the gas.
+//!  - Isothermal: wall held at `temperature` (heat exchangers, ducts).
+//!  - LumpedBody: one solid node of `mass` of `material`, under the applied `load`
+//!    (heat exchangers: the cold head), starting at `initial_temperature`.
+//!  - Conducting: a wall of `material` and `thickness`, one solid node per cell, with
+//!    axial conduction (pulse tube wall).
+struct WallSpec {
+    enum class Kind { Adiabatic, Isothermal, LumpedBody, Conducting };
+    Kind kind = Kind::Adiabatic;
+    double temperature = 0.0;         //!< [K] isothermal
+    std::string material;             //!< lumped body, conducting wall
+    double mass = 0.0;                //!< [kg] lumped body
+    double load = 0.0;                //!< [W] heat applied to the lumped body
+    double initial_temperature = 0.0; //!< [K] lumped body; 0 = use the initial profile
+    double thickness = 0.0;           //!< [m] conducting wall
+    SourceMark mark;
+};
+
+//! A regenerator's housing: a tube of `material` and `thickness` in parallel with the
+//! matrix (it shares the matrix nodes' temperature and adds conduction and heat capacity).
+struct HousingSpec {
+    std::string material;
+    double thickness = 0.0; //!< [m]
+};
+
+//! One component of the main flow path, in order from the drive outward.
+struct ComponentSpec {
+    enum class Kind { Duct, HeatExchanger, Regenerator, Tube, Volume, Orifice };
+    std::string name;
+    Kind kind = Kind::Duct;
+    double length = 0.0;     //!< [m] duct, heat exchanger, regenerator, tube
+    double diameter = 0.0;   //!< [m] inner (frontal) diameter
+    double volume = 0.0;     //!< [m^3] volume
+    int cells = 0;           //!< number of control volumes; 0 = the kind's default
+    double roughness = 0.0;  //!< [m] duct, tube: absolute wall roughness
+    FillSpec fill;           //!< heat exchanger, regenerator
+    WallSpec wall;           //!< see WallSpec
+    std::optional<HousingSpec> housing; //!< regenerator
+    double orifice_diameter = 0.0;      //!< [m] orifice
+    double discharge_coefficient = 0.61;//!< [-] orifice
+    std::string role;        //!< heat exchanger: "cold" | "reject" | "warm" | "" (inferred)
+    SourceMark mark;
+};
+
+//! End of a component: `component.inlet` (towards the drive) or `component.outlet`.
+struct PortSpec {
+    std::string component;
+    bool outlet = true;
+};
+
+//! A connection across the main path (double-inlet bypass valve).
+struct LinkSpec {
+    std::string name;
+    std::string kind = "valve";
+    PortSpec from;  //!< `between[0]`
+    PortSpec to;    //!< `between[1]`
+    double orifice_diameter = 0.0;       //!< [m]
+    double discharge_coefficient = 0.61; //!< [-]
+    SourceMark mark;
+};
+
+//! Periodic-steady-state controls.
+struct SteadySpec {
+    std::string method = "plain";      //!< plain | accelerated
+    double heat_residual = 1e-3;       //!< [-] max |cycle heat of a solid node| / cooling power
+    double energy_residual = 2e-3;     //!< [-] |energy balance error| (relative to PV power)
+    int max_cycles = 20000;
+    int min_cycles = 5;
+};
+
+struct SolverSpec {
+    double relative_tolerance = 1e-6;
+    double absolute_tolerance_scale = 1.0; //!< multiplies the built-in absolute tolerances
+    int max_order = 5;
+    SteadySpec steady;
+};
+
+struct OutputSpec {
+    int samples_per_cycle = 96;
+};
+
+//! Initial temperature profile: the cold end starts at `cold_temperature` (0 = the cold
+//! heat exchanger's wall or body temperature), the regenerator and the tube linear between
+//! their neighbours.
+struct InitialSpec {
+    double cold_temperature = 0.0; //!< [K]
+};
+
+struct CaseDescription {
+    std::string name;
+    std::string description;
+    GasSpec gas;
+    double frequency = 0.0; //!< [Hz]
+    DriveSpec drive;
+    std::vector<ComponentSpec> components;
+    std::vector<LinkSpec> links;
+    SolverSpec solver;
+    OutputSpec output;
+    InitialSpec initial;
+    std::string source_path; //!< the case file as given on the command line
+    std::string source_text; //!< its full text, stored in the result file
+};
+
+} // namespace coldtip
