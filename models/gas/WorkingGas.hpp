@@ -2,7 +2,11 @@
 //! \file WorkingGas.hpp
 //! Working-gas interface: ideal-gas thermodynamics (constant c_p) with temperature- and
 //! density-dependent transport properties. Implementations are stateless and thread-safe.
+//! Outside [minTemperature(), maxTemperature()] a gas holds the transport properties at the
+//! nearest end of the range (it never extrapolates a correlation); likewise above
+//! maxDensity(), and a negative density is taken as zero.
 
+#include <limits>
 #include <memory>
 #include <string>
 #include <string_view>
@@ -29,6 +33,9 @@ public:
     //! Temperature range [K] over which the transport correlations are valid.
     virtual double minTemperature() const = 0;
     virtual double maxTemperature() const = 0;
+    //! Density [kg/m^3] above which the transport properties are held (the correlations'
+    //! density terms are not evaluated beyond it); infinite for dilute-gas models.
+    virtual double maxDensity() const { return std::numeric_limits<double>::infinity(); }
 
     //! Specific gas constant R_s = R/M [J/(kg K)].
     double gasConstant() const { return kMolarGasConstant / molarMass(); }

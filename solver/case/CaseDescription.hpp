@@ -5,6 +5,7 @@
 //! reader sees units or YAML; every position in the file travels along as a SourceMark so
 //! that assembly errors can still point at the line that caused them.
 
+#include <map>
 #include <optional>
 #include <string>
 #include <vector>
@@ -22,7 +23,7 @@ struct SourceMark {
 
 //! Working gas and the charge that fills the machine.
 struct GasSpec {
-    std::string species = "helium";  //!< helium | nitrogen | neon | argon
+    std::string species = "helium";  //!< one of models::knownGasSpecies()
     double charge_pressure = 0.0;    //!< [Pa] pressure when filled at charge_temperature
     double charge_temperature = 0.0; //!< [K]
     SourceMark mark;
@@ -50,13 +51,16 @@ struct DriveSpec {
 struct FillSpec {
     enum class Kind { Open, Slots, Screen, Spheres };
     Kind kind = Kind::Open;
-    std::string material;            //!< matrix material (screen, spheres); may be empty for slots
-    double porosity = 0.0;           //!< [-] screens: derived from mesh and wire if not given
-    double hydraulic_diameter = 0.0; //!< [m] slots: given; screens, spheres: derived
+    std::string material;            //!< matrix material; always set in a regenerator
+    double porosity = 0.0;           //!< [-] screens: 1 - pi mesh wire / 4 if not given
+    //! [m] slots: given; screens, spheres: 0 here, derived by the matrix model from the
+    //! wire or sphere diameter and the porosity
+    double hydraulic_diameter = 0.0;
     double mesh = 0.0;               //!< [1/m] screens: wires per unit length
     double wire_diameter = 0.0;      //!< [m] screens
     double sphere_diameter = 0.0;    //!< [m] spheres
-    double conduction_degradation = 0.1; //!< [-] k_eff/((1-phi) k_s), Lewis et al. (1998)
+    double conduction_degradation = 0.1; //!< [-] k_eff/((1-phi) k_s), Lewis et al. (1998);
+                                         //!< screens, spheres
     SourceMark mark;
 };
 
@@ -94,7 +98,7 @@ struct ComponentSpec {
     double length = 0.0;     //!< [m] duct, heat exchanger, regenerator, tube
     double diameter = 0.0;   //!< [m] inner (frontal) diameter
     double volume = 0.0;     //!< [m^3] volume
-    int cells = 0;           //!< number of control volumes; 0 = the kind's default
+    int cells = 0;           //!< number of control volumes (the reader fills the default)
     double roughness = 0.0;  //!< [m] duct, tube: absolute wall roughness
     FillSpec fill;           //!< heat exchanger, regenerator
     WallSpec wall;           //!< see WallSpec
@@ -162,6 +166,10 @@ struct CaseDescription {
     InitialSpec initial;
     std::string source_path; //!< the case file as given on the command line
     std::string source_text; //!< its full text, stored in the result file
+    //! Where every key and list element given in the file sits, by key path
+    //! ("components[3].fill.wire_diameter", "links[0].between[1]"), so that later stages
+    //! can point at any value, not only at a component.
+    std::map<std::string, SourceMark> marks;
 };
 
 } // namespace coldtip

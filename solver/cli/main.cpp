@@ -1,1 +1,3 @@
-int main() { return 0; }
+#include "solver/cli/Commands.hpp"
+
+int main(int argc, char** argv) { return coldtip::cli::main(argc, argv); }

@@ -1,0 +1,40 @@
+#pragma once
+//! \file Laws.hpp
+//! Adding a law to the network together with the cycle-integral channels that account for
+//! it (what it carries, and whether that crosses a thermal boundary or the machine's
+//! boundary). Components and the machine assembly call these instead of creating elements
+//! directly, so every element is accounted for in the energy balance the same way.
+
+#include <string>
+
+#include "solver/network/Network.hpp"
+
+namespace coldtip {
+
+//! Momentum face on network face `face`. Channels: enthalpy flow (returned), then mass flow
+//! and gas conduction at the next two indices.
+int addMomentumFace(Network& net, int face);
+
+//! Orifice between cells `from` and `to` at axial position x, discharge area C_d A [m^2].
+//! Channels: enthalpy flow (returned), then mass flow at the next index.
+int addOrifice(Network& net, const std::string& name, int component, int from, int to,
+               double discharge_area, double x);
+
+//! Gas-wall heat exchange of `cell` with solid node `solid` or, if solid < 0, with a wall at
+//! `wall_temperature`; `boundary` is the thermal boundary the heat leaves (-1 for matrix and
+//! wall nodes inside the machine), `external` whether that boundary is outside the machine.
+void addWallHeatTransfer(Network& net, int cell, int solid, double wall_temperature,
+                         int boundary, bool external);
+
+//! Solid conduction from node `i` into node `j` or, if j < 0, into a wall at
+//! `wall_temperature`; `boundary` is the thermal boundary on the j side, if any.
+void addSolidConduction(Network& net, int i, int j, double wall_temperature, int boundary,
+                        bool external);
+
+//! The two faces of a cell along the main path (-1 where there is none).
+struct CellFaces {
+    int in = -1, out = -1;
+};
+CellFaces facesOfCell(const Network& net, int cell);
+
+} // namespace coldtip

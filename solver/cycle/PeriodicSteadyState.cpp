@@ -1,0 +1,77 @@
+#include "solver/cycle/PeriodicSteadyState.hpp"
+
+#include <chrono>
+#include <cmath>
+
+namespace coldtip {
+
+std::vector<std::string> boundaryEnthalpyNames(const Machine& machine)
+{
+    std::vector<std::string> names;
+    for (const ComponentSlice& s : machine.network().components()) {
+        names.push_back(s.name + ".inlet");
+        names.push_back(s.name + ".outlet");
+    }
+    return names;
+}
+
+std::vector<double> boundaryEnthalpy(const Machine& machine, const std::vector<double>& averages)
+{
+    std::vector<double> h;
+    for (const ComponentSlice& s : machine.network().components()) {
+        h.push_back(s.inlet_channel >= 0 ? averages[s.inlet_channel] : 0.0);
+        h.push_back(s.outlet_channel >= 0 ? averages[s.outlet_channel] : 0.0);
+    }
+    return h;
+}
+
+bool steadyStateReached(const CycleMetrics& m, const SteadyOptions& o, long cycles)
+{
+    return cycles >= o.min_cycles && m.heat_residual <= o.heat_residual &&
+           std::abs(m.energy_balance_error) <= o.energy_residual;
+}
+
+SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
+                                     std::span<const double> y0, const SteadyOptions& options,
+                                     const std::function<bool(const SteadyOutcome&)>& on_cycle)
+{
+    using Clock = std::chrono::steady_clock;
+    const auto t0 = Clock::now();
+    SteadyOutcome out;
+    out.state.assign(y0.begin(), y0.end());
+    out.period_index = period_index;
+    runner.start(period_index, y0);
+    const Machine& machine = runner.machine();
+    for (long n = 1; n <= options.max_cycles; ++n) {
+        CycleSamples samples;
+        CycleRecord record;
+        try {
+            record = runner.runCycle(&samples, options.samples_per_cycle);
+        } catch (const std::exception& e) {
+            out.failed = true;
+            out.failure = e.what();
+            break;
+        }
+        HistoryRow row;
+        row.cycle = record.cycle;
+        row.time = record.t_end;
+        row.metrics = cycleMetrics(machine, record);
+        row.work = record.work;
+        row.boundary_enthalpy = boundaryEnthalpy(machine, record.averages);
+        row.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();
+        out.history.push_back(row);
+        out.metrics = row.metrics;
+        out.state = record.end_state;
+        out.period_index = runner.periodIndex();
+        out.last = std::move(record);
+        out.samples = std::move(samples);
+        out.wall_time_s = row.wall_time_s;
+        out.converged = steadyStateReached(row.metrics, options, n);
+        if (on_cycle && !on_cycle(out)) break;
+        if (out.converged) break;
+    }
+    out.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();
+    return out;
+}
+
+} // namespace coldtip

@@ -1,0 +1,67 @@
+#pragma once
+//! \file PeriodicSteadyState.hpp
+//! Cycle-by-cycle integration to the periodic steady state, with a stopping test that does
+//! not lie: a small change per cycle is not convergence (the distance to the steady state is
+//! that change times the slowest thermal time constant in cycles; numerics reference §1).
+//! The cycle is converged when
+//!   - every solid node's cycle-integrated net heat is small against the cooling power
+//!     (heat_residual, CycleMetrics), and
+//!   - the machine's energy balance closes (|energy_balance_error| <= energy_residual),
+//! after at least min_cycles periods.
+
+#include <functional>
+#include <string>
+#include <vector>
+
+#include "solver/cycle/CycleMetrics.hpp"
+#include "solver/cycle/CycleRunner.hpp"
+
+namespace coldtip {
+
+struct SteadyOptions {
+    long max_cycles = 20000;
+    long min_cycles = 5;
+    double heat_residual = 1e-3;
+    double energy_residual = 2e-3;
+    int samples_per_cycle = 96;
+};
+
+//! One row of the per-cycle history.
+struct HistoryRow {
+    long cycle = 0;
+    double time = 0.0;      //!< end of the cycle [s]
+    CycleMetrics metrics;
+    IntegratorStats work;
+    std::vector<double> boundary_enthalpy; //!< cycle-mean enthalpy flow per component boundary [W]
+    double wall_time_s = 0.0;
+};
+
+struct SteadyOutcome {
+    bool converged = false;
+    bool failed = false;
+    std::string failure;              //!< what stopped the integration, if it failed
+    std::vector<HistoryRow> history;
+    CycleRecord last;                 //!< the last complete cycle
+    CycleSamples samples;             //!< that cycle, sampled
+    CycleMetrics metrics;             //!< of that cycle
+    std::vector<double> state;        //!< state at the end of the last complete cycle
+    long period_index = 0;            //!< period index at that state
+    double wall_time_s = 0.0;
+};
+
+//! Cycle-mean enthalpy flow at every component boundary, in the order of
+//! boundaryEnthalpyNames().
+std::vector<double> boundaryEnthalpy(const Machine& machine, const std::vector<double>& averages);
+std::vector<std::string> boundaryEnthalpyNames(const Machine& machine);
+
+//! The convergence test on one cycle's metrics.
+bool steadyStateReached(const CycleMetrics& m, const SteadyOptions& o, long cycles);
+
+//! Integrate period after period from (period_index, y0) until converged, failed or
+//! max_cycles. `on_cycle` (may be empty) sees the outcome after every cycle (progress,
+//! checkpoints); returning false from it stops the run (interrupted).
+SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
+                                     std::span<const double> y0, const SteadyOptions& options,
+                                     const std::function<bool(const SteadyOutcome&)>& on_cycle);
+
+} // namespace coldtip

@@ -1,0 +1,261 @@
+#include "solver/integrator/CvodeSession.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <fmt/format.h>
+#include <numeric>
+#include <cstdlib>
+#include <utility>
+
+namespace coldtip {
+
+namespace {
+std::span<const double> viewOf(N_Vector v)
+{
+    return {N_VGetArrayPointer(v), static_cast<std::size_t>(N_VGetLength(v))};
+}
+std::span<double> mutableViewOf(N_Vector v)
+{
+    return {N_VGetArrayPointer(v), static_cast<std::size_t>(N_VGetLength(v))};
+}
+} // namespace
+
+CvodeSession::CvodeSession(const Network& network, const IntegratorOptions& options, double t0,
+                           std::span<const double> y0)
+    : m_network(network), m_options(options), m_t(t0)
+{
+    const sunindextype n = network.size();
+    if (static_cast<sunindextype>(y0.size()) != n ||
+        static_cast<sunindextype>(options.absolute_tolerances.size()) != n)
+        throw std::invalid_argument("CvodeSession: state or tolerance vector of wrong size");
+
+    SUNContext ctx = nullptr;
+    if (SUNContext_Create(nullptr, &ctx) != 0 || !ctx)
+        throw IntegratorError("SUNContext_Create failed", -1, t0, {});
+    m_context.reset(ctx);
+
+    auto vector = [&](sunindextype size, const char* what) {
+        N_Vector v = N_VNew_Serial(size, ctx);
+        if (!v) throw IntegratorError(fmt::format("N_VNew_Serial({}) failed", what), -1, t0, {});
+        return v;
+    };
+    m_y.reset(vector(n, "state"));
+    m_atol.reset(vector(n, "tolerances"));
+    std::copy(y0.begin(), y0.end(), N_VGetArrayPointer(m_y.get()));
+    std::copy(options.absolute_tolerances.begin(), options.absolute_tolerances.end(),
+              N_VGetArrayPointer(m_atol.get()));
+
+    const SparsityPattern& pattern = network.pattern();
+    m_matrix.reset(SUNSparseMatrix(n, n, pattern.nnz(), CSC_MAT, ctx));
+    if (!m_matrix) throw IntegratorError("SUNSparseMatrix failed", -1, t0, {});
+    m_solver.reset(SUNLinSol_KLU(m_y.get(), m_matrix.get(), ctx));
+    if (!m_solver) throw IntegratorError("SUNLinSol_KLU failed", -1, t0, {});
+
+    m_cvode.reset(CVodeCreate(CV_BDF, ctx));
+    if (!m_cvode) throw IntegratorError("CVodeCreate failed", -1, t0, {});
+    void* mem = m_cvode.get();
+    check(CVodeSetErrHandlerFn(mem, &CvodeSession::errorHandler, this), "CVodeSetErrHandlerFn");
+    check(CVodeInit(mem, &CvodeSession::rhs, t0, m_y.get()), "CVodeInit");
+    check(CVodeSetUserData(mem, this), "CVodeSetUserData");
+    check(CVodeSVtolerances(mem, options.relative_tolerance, m_atol.get()), "CVodeSVtolerances");
+    check(CVodeSetLinearSolver(mem, m_solver.get(), m_matrix.get()), "CVodeSetLinearSolver");
+    check(CVodeSetJacFn(mem, &CvodeSession::jacobian), "CVodeSetJacFn");
+    check(CVodeSetMaxOrd(mem, options.max_order), "CVodeSetMaxOrd");
+    if (std::getenv("COLDTIP_STALD")) check(CVodeSetStabLimDet(mem, SUNTRUE), "CVodeSetStabLimDet");
+    check(CVodeSetMaxNumSteps(mem, options.max_steps_per_call), "CVodeSetMaxNumSteps");
+    if (options.initial_step > 0.0)
+        check(CVodeSetInitStep(mem, options.initial_step), "CVodeSetInitStep");
+
+    const int nq = network.nQuadratures();
+    m_scratch.assign(n, 0.0);
+    m_quad_values.assign(nq, 0.0);
+    if (nq > 0) {
+        m_q.reset(vector(nq, "quadratures"));
+        N_VConst(0.0, m_q.get());
+        check(CVodeQuadInit(mem, &CvodeSession::quadratureRhs, m_q.get()), "CVodeQuadInit");
+        // Pure quadratures stay out of the error test (errconQ = false, the default): they
+        // do not steer the step size, and cost one evaluation per step.
+        check(CVodeSetQuadErrCon(mem, SUNFALSE), "CVodeSetQuadErrCon");
+    }
+}
+
+CvodeSession::~CvodeSession() = default;
+
+void CvodeSession::reinit(double t0, std::span<const double> y0)
+{
+    addCountersTo(m_previous);
+    std::copy(y0.begin(), y0.end(), N_VGetArrayPointer(m_y.get()));
+    void* mem = m_cvode.get();
+    check(CVodeReInit(mem, t0, m_y.get()), "CVodeReInit");
+    if (m_q) {
+        N_VConst(0.0, m_q.get());
+        check(CVodeQuadReInit(mem, m_q.get()), "CVodeQuadReInit");
+    }
+    m_t = t0;
+}
+
+double CvodeSession::advance(double t_out, double t_stop)
+{
+    void* mem = m_cvode.get();
+    check(CVodeSetStopTime(mem, t_stop), "CVodeSetStopTime");
+    sunrealtype t_reached = m_t;
+    const int flag = CVode(mem, t_out, m_y.get(), &t_reached, CV_NORMAL);
+    // In 6.4, tout == tstop returns CV_SUCCESS (stop time left armed); tout past tstop
+    // returns CV_TSTOP_RETURN. Both are success; the stop time is re-armed every call.
+    if (flag < 0) check(flag, "CVode");
+    if (m_callback_error) std::rethrow_exception(std::exchange(m_callback_error, nullptr));
+    m_t = t_reached;
+    return m_t;
+}
+
+std::span<const double> CvodeSession::state() const { return viewOf(m_y.get()); }
+
+const std::vector<double>& CvodeSession::quadratures()
+{
+    if (!m_q) return m_quad_values;
+    sunrealtype t = 0.0;
+    check(CVodeGetQuad(m_cvode.get(), &t, m_q.get()), "CVodeGetQuad");
+    const auto q = viewOf(m_q.get());
+    std::copy(q.begin(), q.end(), m_quad_values.begin());
+    return m_quad_values;
+}
+
+void CvodeSession::addCountersTo(IntegratorStats& s) const
+{
+    void* mem = m_cvode.get();
+    long v = 0;
+    if (CVodeGetNumSteps(mem, &v) == CV_SUCCESS) s.steps += v;
+    if (CVodeGetNumRhsEvals(mem, &v) == CV_SUCCESS) s.rhs_evaluations += v;
+    if (m_q && CVodeGetQuadNumRhsEvals(mem, &v) == CV_SUCCESS) s.rhs_evaluations += v;
+    if (CVodeGetNumJacEvals(mem, &v) == CV_SUCCESS) s.jacobian_evaluations += v;
+    if (CVodeGetNumLinSolvSetups(mem, &v) == CV_SUCCESS) s.linear_setups += v;
+    if (CVodeGetNumErrTestFails(mem, &v) == CV_SUCCESS) s.error_test_failures += v;
+    if (CVodeGetNumNonlinSolvIters(mem, &v) == CV_SUCCESS) s.nonlinear_iterations += v;
+    if (CVodeGetNumNonlinSolvConvFails(mem, &v) == CV_SUCCESS) s.nonlinear_failures += v;
+}
+
+IntegratorStats CvodeSession::stats() const
+{
+    IntegratorStats s = m_previous;
+    addCountersTo(s);
+    return s;
+}
+
+double CvodeSession::lastStep() const
+{
+    sunrealtype h = 0.0;
+    CVodeGetLastStep(m_cvode.get(), &h);
+    return h;
+}
+
+std::vector<std::string> CvodeSession::worstStates(int limit) const
+{
+    const sunindextype n = m_network.size();
+    N_Vector w = N_VClone(m_y.get());
+    N_Vector e = N_VClone(m_y.get());
+    std::vector<std::string> out;
+    if (w && e && CVodeGetErrWeights(m_cvode.get(), w) == CV_SUCCESS &&
+        CVodeGetEstLocalErrors(m_cvode.get(), e) == CV_SUCCESS) {
+        const double* wd = N_VGetArrayPointer(w);
+        const double* ed = N_VGetArrayPointer(e);
+        std::vector<int> order(n);
+        std::iota(order.begin(), order.end(), 0);
+        auto size = [&](int k) { return std::abs(wd[k] * ed[k]); };
+        const int m = std::min<int>(limit, static_cast<int>(n));
+        std::partial_sort(order.begin(), order.begin() + m, order.end(),
+                          [&](int a, int b) { return size(a) > size(b); });
+        for (int i = 0; i < m && size(order[i]) > 0.0; ++i)
+            out.push_back(fmt::format("{} (weighted error {:.3g})",
+                                      m_network.stateName(order[i]), size(order[i])));
+    }
+    if (w) N_VDestroy(w);
+    if (e) N_VDestroy(e);
+    return out;
+}
+
+void CvodeSession::check(int flag, const char* call)
+{
+    if (flag >= 0) return;
+    if (m_callback_error) std::rethrow_exception(std::exchange(m_callback_error, nullptr));
+    sunrealtype t = m_t;
+    if (m_cvode) CVodeGetCurrentTime(m_cvode.get(), &t);
+    std::string what = fmt::format("{} failed with {} at t = {:.9g} s", call,
+                                   CVodeGetReturnFlagName(flag), t);
+    if (!m_last_message.empty()) what += ": " + m_last_message;
+    if (flag == CV_LSETUP_FAIL || flag == CV_LSOLVE_FAIL) {
+        long lsflag = 0;
+        if (CVodeGetLastLinFlag(m_cvode.get(), &lsflag) == CV_SUCCESS)
+            what += fmt::format(" (linear solver: {})", CVodeGetLinReturnFlagName(lsflag));
+    }
+    std::vector<std::string> worst;
+    if (m_cvode && flag != CV_MEM_NULL) worst = worstStates(10);
+    throw IntegratorError(what, flag, t, std::move(worst));
+}
+
+int CvodeSession::callbackFailure(std::exception_ptr e, bool recoverable)
+{
+    if (recoverable) return 1;
+    m_callback_error = e;
+    return -1;
+}
+
+int CvodeSession::rhs(sunrealtype t, N_Vector y, N_Vector ydot, void* self)
+{
+    auto* s = static_cast<CvodeSession*>(self);
+    try {
+        const auto yv = viewOf(y);
+        s->m_network.checkPhysical(yv);
+        const auto rates = mutableViewOf(ydot);
+        s->m_network.evaluate(t, yv, rates, nullptr);
+        for (double r : rates)
+            if (!std::isfinite(r)) return 1; // e.g. a property outside its range: cut the step
+        return 0;
+    } catch (const RecoverableStateError&) {
+        return s->callbackFailure(std::current_exception(), true);
+    } catch (...) {
+        return s->callbackFailure(std::current_exception(), false);
+    }
+}
+
+int CvodeSession::quadratureRhs(sunrealtype t, N_Vector y, N_Vector yq, void* self)
+{
+    auto* s = static_cast<CvodeSession*>(self);
+    try {
+        s->m_network.evaluate(t, viewOf(y), s->m_scratch, N_VGetArrayPointer(yq));
+        return 0;
+    } catch (...) {
+        return s->callbackFailure(std::current_exception(), false);
+    }
+}
+
+int CvodeSession::jacobian(sunrealtype t, N_Vector y, N_Vector, SUNMatrix J, void* self,
+                           N_Vector, N_Vector, N_Vector)
+{
+    auto* s = static_cast<CvodeSession*>(self);
+    try {
+        // CVODE zeroes the whole matrix, index arrays included, before calling us: the
+        // cached pattern goes back in, then the values by slot.
+        const SparsityPattern& p = s->m_network.pattern();
+        sunindextype* starts = SUNSparseMatrix_IndexPointers(J);
+        sunindextype* rows = SUNSparseMatrix_IndexValues(J);
+        std::copy(p.column_starts.begin(), p.column_starts.end(), starts);
+        std::copy(p.row_indices.begin(), p.row_indices.end(), rows);
+        std::span<double> values(SUNSparseMatrix_Data(J), static_cast<std::size_t>(p.nnz()));
+        s->m_network.jacobian(t, viewOf(y), values);
+        return 0;
+    } catch (const RecoverableStateError&) {
+        return s->callbackFailure(std::current_exception(), true);
+    } catch (...) {
+        return s->callbackFailure(std::current_exception(), false);
+    }
+}
+
+void CvodeSession::errorHandler(int, const char* module, const char* function, char* msg,
+                                void* self)
+{
+    auto* s = static_cast<CvodeSession*>(self);
+    s->m_last_message = fmt::format("{} ({}: {})", msg ? msg : "", module ? module : "",
+                                    function ? function : "");
+}
+
+} // namespace coldtip

@@ -1,0 +1,308 @@
+#include "solver/output/ResultFile.hpp"
+
+#include <algorithm>
+#include <stdexcept>
+
+#include "solver/cycle/Harmonics.hpp"
+#include "solver/output/Hdf5File.hpp"
+
+namespace coldtip {
+
+namespace {
+
+void writeGrid(Hdf5Writer& w, const Machine& machine)
+{
+    const Network& net = machine.network();
+    std::vector<double> x, volume, flow_area, length;
+    std::vector<long> component;
+    std::vector<std::string> names;
+    for (const GasCell& c : net.cells()) {
+        x.push_back(c.x);
+        volume.push_back(c.volume);
+        flow_area.push_back(c.flow_area);
+        length.push_back(c.length);
+        component.push_back(c.component);
+        names.push_back(c.name);
+    }
+    w.write("/grid/cells/x", x, "m");
+    w.write("/grid/cells/volume", volume, "m^3");
+    w.write("/grid/cells/flow_area", flow_area, "m^2");
+    w.write("/grid/cells/length", length, "m");
+    w.write("/grid/cells/component", component, "1");
+    w.writeStrings("/grid/cells/name", names);
+
+    x.clear(), flow_area.clear(), component.clear(), names.clear();
+    for (const FlowFace& f : net.faces()) {
+        x.push_back(f.x);
+        component.push_back(f.component);
+        names.push_back(f.name);
+        flow_area.push_back(std::min(net.cells()[f.from].flow_area > 0 ? net.cells()[f.from].flow_area : 1e300,
+                                     net.cells()[f.to].flow_area > 0 ? net.cells()[f.to].flow_area : 1e300));
+    }
+    w.write("/grid/faces/x", x, "m");
+    w.write("/grid/faces/flow_area", flow_area, "m^2");
+    w.write("/grid/faces/component", component, "1");
+    w.writeStrings("/grid/faces/name", names);
+
+    x.clear(), component.clear(), names.clear();
+    for (const SolidNode& s : net.solids()) {
+        x.push_back(s.x);
+        component.push_back(s.component);
+        names.push_back(s.name);
+    }
+    w.write("/grid/solids/x", x, "m");
+    w.write("/grid/solids/component", component, "1");
+    w.writeStrings("/grid/solids/name", names);
+
+    std::vector<std::string> kinds;
+    std::vector<double> x0, x1;
+    names.clear();
+    for (const ComponentSlice& s : net.components()) {
+        names.push_back(s.name);
+        kinds.push_back(s.kind);
+        x0.push_back(s.x_start);
+        x1.push_back(s.x_end);
+    }
+    w.writeStrings("/grid/components/name", names);
+    w.writeStrings("/grid/components/kind", kinds);
+    w.write("/grid/components/x_start", x0, "m");
+    w.write("/grid/components/x_end", x1, "m");
+}
+
+//! Sampled cycle: pressure, temperature, mass flow, solid temperature, drive.
+void writeCycle(Hdf5Writer& w, const Machine& machine, const CycleSamples& s)
+{
+    const Network& net = machine.network();
+    const GasProperties& gas = net.gas();
+    const std::size_t n = s.time.size(), nc = net.cells().size(), nf = net.faces().size(),
+                      ns = net.solids().size();
+    std::vector<double> p(n * nc), T(n * nc), mdot(n * nf), Ts(n * ns), xd(n), Vd(n);
+    const MovingBoundary& piston = machine.drive().piston();
+    for (std::size_t j = 0; j < n; ++j) {
+        const auto& y = s.state[j];
+        for (std::size_t i = 0; i < nc; ++i) {
+            const GasCell& c = net.cells()[i];
+            p[j * nc + i] = (gas.gamma - 1.0) * y[c.offset + 1] / c.volumeAt(s.time[j]);
+            T[j * nc + i] = y[c.offset + 1] / (y[c.offset] * gas.cv);
+        }
+        for (std::size_t f = 0; f < nf; ++f) mdot[j * nf + f] = y[net.faces()[f].offset];
+        for (std::size_t k = 0; k < ns; ++k) Ts[j * ns + k] = y[net.solids()[k].offset];
+        xd[j] = piston.scale * piston.amplitude * std::sin(piston.omega * s.time[j]);
+        Vd[j] = piston.volume(s.time[j]);
+    }
+    w.write("/cycle/time", s.time, "s");
+    w.write("/cycle/pressure", p, n, nc, "Pa");
+    w.write("/cycle/gas_temperature", T, n, nc, "K");
+    w.write("/cycle/mass_flow", mdot, n, nf, "kg/s");
+    w.write("/cycle/solid_temperature", Ts, n, ns, "K");
+    w.write("/cycle/drive_position", xd, "m");
+    w.write("/cycle/drive_volume", Vd, "m^3");
+}
+
+void writeHistory(Hdf5Writer& w, const Machine& machine, const std::vector<HistoryRow>& h)
+{
+    std::vector<long> cycle, steps, rhs, jac;
+    std::vector<double> time, Tc, Qc, gross, pv, err, res, dT, wall, boundary;
+    for (const HistoryRow& r : h) {
+        cycle.push_back(r.cycle);
+        time.push_back(r.time);
+        Tc.push_back(r.metrics.cold_temperature);
+        Qc.push_back(r.metrics.cooling_power);
+        gross.push_back(r.metrics.gross_cooling);
+        pv.push_back(r.metrics.pv_power);
+        err.push_back(r.metrics.energy_balance_error);
+        res.push_back(r.metrics.heat_residual);
+        dT.push_back(r.metrics.max_temperature_change);
+        steps.push_back(r.work.steps);
+        rhs.push_back(r.work.rhs_evaluations);
+        jac.push_back(r.work.jacobian_evaluations);
+        wall.push_back(r.wall_time_s);
+        boundary.insert(boundary.end(), r.boundary_enthalpy.begin(), r.boundary_enthalpy.end());
+    }
+    w.write("/history/cycle", cycle, "1");
+    w.write("/history/time", time, "s");
+    w.write("/history/cold_temperature", Tc, "K");
+    w.write("/history/cooling_power", Qc, "W");
+    w.write("/history/gross_cooling_power", gross, "W");
+    w.write("/history/pv_power", pv, "W");
+    w.write("/history/energy_balance_error", err, "1");
+    w.write("/history/steady_residual", res, "1");
+    w.write("/history/max_temperature_change", dT, "K");
+    w.write("/history/steps", steps, "1");
+    w.write("/history/rhs_evaluations", rhs, "1");
+    w.write("/history/jacobian_evaluations", jac, "1");
+    w.write("/history/wall_time", wall, "s");
+    const std::vector<std::string> names = boundaryEnthalpyNames(machine);
+    w.write("/history/boundary_enthalpy_flow", boundary, h.size(), names.size(), "W");
+    w.writeStrings("/history/boundary_name", names);
+}
+
+//! Cycle averages along the machine: exact integrals for enthalpy flow, conduction and wall
+//! heat; acoustic power and amplitudes from the sampled cycle.
+void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& out)
+{
+    using K = QuadratureChannel::Kind;
+    const Network& net = machine.network();
+    const auto& channels = net.quadratures();
+    const auto& avg = out.last.averages;
+    auto series = [&](K kind, const std::string& path, const std::string& units) {
+        std::vector<double> x, v;
+        std::vector<std::string> names;
+        for (std::size_t i = 0; i < channels.size(); ++i)
+            if (channels[i].kind == kind) {
+                x.push_back(channels[i].x);
+                v.push_back(avg.empty() ? 0.0 : avg[i]);
+                names.push_back(channels[i].name);
+            }
+        w.write(path + "/x", x, "m");
+        w.write(path + "/value", v, units);
+        w.writeStrings(path + "/name", names);
+    };
+    series(K::EnthalpyFlow, "/profile/enthalpy_flow", "W");
+    series(K::GasConduction, "/profile/gas_conduction", "W");
+    series(K::WallHeat, "/profile/wall_heat", "W");
+    series(K::SolidNetHeat, "/profile/solid_net_heat", "W");
+
+    const CycleSamples& s = out.samples;
+    const std::size_t n = s.time.size();
+    if (n == 0) return;
+    const GasProperties& gas = net.gas();
+    const std::size_t nc = net.cells().size();
+    std::vector<double> T_mean(nc), p_mean(nc), p_amp(nc), p_phase(nc);
+    std::vector<std::vector<double>> p(nc, std::vector<double>(n)), rho(nc, std::vector<double>(n));
+    for (std::size_t i = 0; i < nc; ++i) {
+        const GasCell& c = net.cells()[i];
+        std::vector<double> T(n);
+        for (std::size_t j = 0; j < n; ++j) {
+            const auto& y = s.state[j];
+            const double V = c.volumeAt(s.time[j]);
+            p[i][j] = (gas.gamma - 1.0) * y[c.offset + 1] / V;
+            rho[i][j] = y[c.offset] / V;
+            T[j] = y[c.offset + 1] / (y[c.offset] * gas.cv);
+        }
+        T_mean[i] = cycleMean(T);
+        p_mean[i] = cycleMean(p[i]);
+        const auto p1 = harmonic(p[i], 1);
+        p_amp[i] = std::abs(p1);
+        p_phase[i] = std::arg(p1) * 180.0 / M_PI;
+    }
+    std::vector<double> xc;
+    for (const GasCell& c : net.cells()) xc.push_back(c.x);
+    w.write("/profile/cells/x", xc, "m");
+    w.write("/profile/cells/mean_gas_temperature", T_mean, "K");
+    w.write("/profile/cells/mean_pressure", p_mean, "Pa");
+    w.write("/profile/cells/pressure_amplitude", p_amp, "Pa");
+    w.write("/profile/cells/pressure_phase", p_phase, "deg");
+
+    const std::size_t nf = net.faces().size();
+    std::vector<double> xf(nf), acoustic(nf), m_amp(nf), m_phase(nf), flow_vs_p(nf);
+    for (std::size_t f = 0; f < nf; ++f) {
+        const FlowFace& face = net.faces()[f];
+        std::vector<double> pf(n), U(n), m(n), pU(n);
+        for (std::size_t j = 0; j < n; ++j) {
+            pf[j] = 0.5 * (p[face.from][j] + p[face.to][j]);
+            m[j] = s.state[j][face.offset];
+            U[j] = m[j] / (0.5 * (rho[face.from][j] + rho[face.to][j]));
+            pU[j] = pf[j] * U[j];
+        }
+        xf[f] = face.x;
+        acoustic[f] = cycleMean(pU) - cycleMean(pf) * cycleMean(U);
+        const auto m1 = harmonic(m, 1), p1 = harmonic(pf, 1);
+        m_amp[f] = std::abs(m1);
+        m_phase[f] = std::arg(m1) * 180.0 / M_PI;
+        flow_vs_p[f] = std::arg(m1 / p1) * 180.0 / M_PI;
+    }
+    w.write("/profile/faces/x", xf, "m");
+    w.write("/profile/faces/acoustic_power", acoustic, "W");
+    w.write("/profile/faces/mass_flow_amplitude", m_amp, "kg/s");
+    w.write("/profile/faces/mass_flow_phase", m_phase, "deg");
+    w.write("/profile/faces/flow_phase_relative_to_pressure", flow_vs_p, "deg");
+
+    const std::size_t ns = net.solids().size();
+    std::vector<double> xs(ns), Ts(ns);
+    for (std::size_t k = 0; k < ns; ++k) {
+        std::vector<double> T(n);
+        for (std::size_t j = 0; j < n; ++j) T[j] = s.state[j][net.solids()[k].offset];
+        xs[k] = net.solids()[k].x;
+        Ts[k] = cycleMean(T);
+    }
+    w.write("/profile/solids/x", xs, "m");
+    w.write("/profile/solids/mean_temperature", Ts, "K");
+}
+
+std::string unitsOf(const std::string& key)
+{
+    if (key.ends_with("_W")) return "W";
+    if (key.ends_with("_K")) return "K";
+    if (key.ends_with("_Hz")) return "Hz";
+    if (key.ends_with("_Pa")) return "Pa";
+    if (key.ends_with("_s")) return "s";
+    return "1";
+}
+
+} // namespace
+
+void writeRunResult(const std::string& path, const Machine& machine, const SteadyOutcome& out,
+                    const RunSummary& summary, const RunInfo& info)
+{
+    Hdf5Writer w(path);
+    const CaseDescription& d = machine.description();
+    w.attribute("/case", "text", d.source_text);
+    w.attribute("/case", "path", d.source_path);
+    w.attribute("/case", "name", d.name);
+    w.attribute("/case", "tool_version", std::string("coldtip ") + COLDTIP_VERSION);
+    w.attribute("/case", "command_line", info.command_line);
+    writeGrid(w, machine);
+    if (!out.samples.time.empty()) writeCycle(w, machine, out.samples);
+    writeHistory(w, machine, out.history);
+    writeProfile(w, machine, out);
+
+    for (const SummaryValue& v : summary.values) w.attribute("/summary", v.key, v.value);
+    w.attribute("/summary", "case", summary.case_name);
+    w.attribute("/summary", "status", summary.status);
+    w.attribute("/summary", "failure", summary.failure);
+    std::string units;
+    for (const SummaryValue& v : summary.values) units += v.key + ":" + unitsOf(v.key) + ";";
+    w.attribute("/summary", "units", units);
+
+    const SolverSpec& sv = d.solver;
+    w.attribute("/solver", "relative_tolerance", sv.relative_tolerance);
+    w.attribute("/solver", "max_order", static_cast<long>(sv.max_order));
+    w.attribute("/solver", "states", static_cast<long>(machine.network().size()));
+    w.attribute("/solver", "jacobian_nonzeros", machine.network().pattern().nnz());
+    w.attribute("/solver", "quadratures", static_cast<long>(machine.network().nQuadratures()));
+
+    std::vector<std::string> names;
+    for (int k = 0; k < machine.network().size(); ++k) names.push_back(machine.network().stateName(k));
+    w.write("/state/y", out.state, "SI (see name)");
+    w.writeStrings("/state/name", names);
+    w.attribute("/state", "period_index", out.period_index);
+    w.attribute("/state", "cycles", static_cast<long>(out.history.size()));
+    w.commit();
+}
+
+SavedState readSavedState(const std::string& path, const Machine& machine)
+{
+    try {
+        Hdf5Reader r(path);
+        SavedState s;
+        s.state = r.doubles("/state/y");
+        s.names = r.strings("/state/name");
+        s.period_index = r.longAttribute("/state", "period_index");
+        const Network& net = machine.network();
+        if (static_cast<int>(s.state.size()) != net.size())
+            throw std::runtime_error("its state has " + std::to_string(s.state.size()) +
+                                     " variables, the case has " + std::to_string(net.size()));
+        for (int k = 0; k < net.size(); ++k)
+            if (s.names[k] != net.stateName(k))
+                throw std::runtime_error("its state variable " + std::to_string(k) + " is " +
+                                         s.names[k] + ", the case's is " + net.stateName(k));
+        return s;
+    } catch (const H5::Exception& e) {
+        throw std::runtime_error(path + ": cannot read a saved state: " + e.getDetailMsg());
+    } catch (const std::runtime_error& e) {
+        throw std::runtime_error(path + ": cannot resume from it: " + e.what());
+    }
+}
+
+} // namespace coldtip

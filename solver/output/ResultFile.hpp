@@ -1,0 +1,30 @@
+#pragma once
+//! \file ResultFile.hpp
+//! The result file of a run (DESIGN §7; layout documented in README.md, "Result file"):
+//! /case, /grid, /cycle, /history, /profile, /summary, /solver and /state (the state at the
+//! end of the last complete cycle, for --resume and warm starts). Units on every dataset.
+//! Written whole and moved into place, so a kill leaves the previous complete file.
+
+#include <string>
+
+#include "solver/output/RunSummary.hpp"
+
+namespace coldtip {
+
+struct RunInfo {
+    std::string command_line;
+};
+
+void writeRunResult(const std::string& path, const Machine& machine, const SteadyOutcome& outcome,
+                    const RunSummary& summary, const RunInfo& info);
+
+//! State saved in a result file: the period index and the state vector at its start.
+struct SavedState {
+    long period_index = 0;
+    std::vector<double> state;
+    std::vector<std::string> names;
+};
+//! Reads /state; throws std::runtime_error naming the file if it has none or it does not fit.
+SavedState readSavedState(const std::string& path, const Machine& machine);
+
+} // namespace coldtip
