@@ -84,10 +84,11 @@ void Component::addWallExchange(AssemblyContext& ctx, int solid_of_first_cell,
                                 bool one_node_each, double wall_temperature)
 {
     const bool external = solid_of_first_cell < 0 && m_boundary >= 0;
+    const int channel = addWallHeatChannel(ctx.network, m_index, m_boundary, external);
     for (int c = m_first_cell; c <= m_last_cell; ++c) {
         int solid = solid_of_first_cell;
         if (solid >= 0 && one_node_each) solid += c - m_first_cell;
-        addWallHeatTransfer(ctx.network, c, solid, wall_temperature, m_boundary, external);
+        addWallHeatTransfer(ctx.network, c, solid, wall_temperature, channel);
     }
 }
 

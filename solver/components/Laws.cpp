@@ -28,12 +28,14 @@ int addMomentumFace(Network& net, int face)
     using K = QuadratureChannel::Kind;
     const FlowFace& f = net.faces().at(face);
     const int h = channel(net, f.name + ".enthalpy_flow", K::EnthalpyFlow, f.component, f.x);
-    const int m = channel(net, f.name + ".mass_flow", K::MassFlow, f.component, f.x);
-    const int q = channel(net, f.name + ".gas_conduction", K::GasConduction, f.component, f.x);
+    const bool junction = net.cells()[f.from].component != net.cells()[f.to].component;
+    const int q = junction ? channel(net, f.name + ".gas_conduction", K::GasConduction,
+                                     f.component, f.x)
+                           : -1;
     const int before = facesOfCell(net, f.from).in;
     const int after = facesOfCell(net, f.to).out;
     net.addElement<MomentumFace>(f, face, before >= 0 ? net.faces()[before].from : -1,
-                                 after >= 0 ? net.faces()[after].to : -1, net.cells(), h, m, q);
+                                 after >= 0 ? net.faces()[after].to : -1, net.cells(), h, q);
     return h;
 }
 
@@ -42,8 +44,7 @@ int addOrifice(Network& net, const std::string& name, int component, int from, i
 {
     using K = QuadratureChannel::Kind;
     const int h = channel(net, name + ".enthalpy_flow", K::EnthalpyFlow, component, x);
-    const int m = channel(net, name + ".mass_flow", K::MassFlow, component, x);
-    net.addElement<OrificeLink>(name, from, to, discharge_area, net.cells(), h, m);
+    net.addElement<OrificeLink>(name, from, to, discharge_area, net.cells(), h);
     return h;
 }
 
@@ -58,29 +59,31 @@ CellFaces facesOfCell(const Network& net, int cell)
     return cf;
 }
 
-void addWallHeatTransfer(Network& net, int cell, int solid, double wall_temperature,
-                         int boundary, bool external)
+int addWallHeatChannel(Network& net, int component, int boundary, bool external)
 {
-    const GasCell& c = net.cells().at(cell);
-    const int q = channel(net, c.name + ".wall_heat", QuadratureChannel::Kind::WallHeat,
-                          c.component, c.x, boundary, +1.0, external ? +1.0 : 0.0);
-    const int qs = solid >= 0 ? net.solidHeatChannel(solid) : -1;
+    const ComponentSlice& s = net.components().at(component);
+    return channel(net, s.name + ".wall_heat", QuadratureChannel::Kind::WallHeat, component,
+                   0.5 * (s.x_start + s.x_end), boundary, +1.0, external ? +1.0 : 0.0);
+}
+
+void addWallHeatTransfer(Network& net, int cell, int solid, double wall_temperature, int q)
+{
     const CellFaces cf = facesOfCell(net, cell);
     net.addElement<WallHeatTransfer>(cell, cf.in, cf.out, solid, wall_temperature, net.cells(),
-                                     net.faces(), net.solids(), q, qs);
+                                     net.faces(), net.solids(), q);
 }
 
 void addSolidConduction(Network& net, int i, int j, double wall_temperature, int boundary,
                         bool external)
 {
     const SolidNode& a = net.solids().at(i);
+    const bool internal = j >= 0 && boundary < 0 && net.solids().at(j).component == a.component;
     const std::string to = j >= 0 ? net.solids().at(j).name : std::string("wall");
-    const int q = channel(net, a.name + "->" + to + ".conduction",
-                          QuadratureChannel::Kind::SolidConduction, a.component, a.x, boundary,
-                          -1.0, external ? -1.0 : 0.0);
-    net.addElement<SolidConduction>(i, j, wall_temperature, net.solids(), q,
-                                    net.solidHeatChannel(i),
-                                    j >= 0 ? net.solidHeatChannel(j) : -1);
+    const int q = internal ? -1
+                           : channel(net, a.name + "->" + to + ".conduction",
+                                     QuadratureChannel::Kind::SolidConduction, a.component, a.x,
+                                     boundary, -1.0, external ? -1.0 : 0.0);
+    net.addElement<SolidConduction>(i, j, wall_temperature, net.solids(), q);
 }
 
 } // namespace coldtip

@@ -11,23 +11,28 @@
 
 namespace coldtip {
 
-//! Momentum face on network face `face`. Channels: enthalpy flow (returned), then mass flow
-//! and gas conduction at the next two indices.
+//! Momentum face on network face `face`, with a channel for its enthalpy flow (returned)
+//! and, at a junction between components, one for its gas conduction.
 int addMomentumFace(Network& net, int face);
 
-//! Orifice between cells `from` and `to` at axial position x, discharge area C_d A [m^2].
-//! Channels: enthalpy flow (returned), then mass flow at the next index.
+//! Orifice between cells `from` and `to` at axial position x, discharge area C_d A [m^2];
+//! returns its enthalpy-flow channel.
 int addOrifice(Network& net, const std::string& name, int component, int from, int to,
                double discharge_area, double x);
 
+//! The channel for the heat a component's walls give its gas; `boundary` is the thermal
+//! boundary the heat leaves (-1 for matrix and wall nodes inside the machine), `external`
+//! whether that boundary is outside the machine.
+int addWallHeatChannel(Network& net, int component, int boundary, bool external);
+
 //! Gas-wall heat exchange of `cell` with solid node `solid` or, if solid < 0, with a wall at
-//! `wall_temperature`; `boundary` is the thermal boundary the heat leaves (-1 for matrix and
-//! wall nodes inside the machine), `external` whether that boundary is outside the machine.
-void addWallHeatTransfer(Network& net, int cell, int solid, double wall_temperature,
-                         int boundary, bool external);
+//! `wall_temperature`, accounted in `channel`.
+void addWallHeatTransfer(Network& net, int cell, int solid, double wall_temperature, int channel);
 
 //! Solid conduction from node `i` into node `j` or, if j < 0, into a wall at
-//! `wall_temperature`; `boundary` is the thermal boundary on the j side, if any.
+//! `wall_temperature`; `boundary` is the thermal boundary on the j side, if any. Conduction
+//! within one component's column has no channel (it is internal); conduction into another
+//! component's wall or solid is accounted.
 void addSolidConduction(Network& net, int i, int j, double wall_temperature, int boundary,
                         bool external);
 

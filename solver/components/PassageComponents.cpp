@@ -98,8 +98,7 @@ void HeatExchanger::addElements(AssemblyContext& ctx)
         q.component = m_index;
         q.external_sign = +1.0;
         const int ql = net.addQuadrature(q);
-        net.addElement<HeatLoad>(m_body, m_spec.wall.load, net.solids(), ql,
-                                 net.solidHeatChannel(m_body));
+        net.addElement<HeatLoad>(m_body, m_spec.wall.load, net.solids(), ql);
     }
 }
 

@@ -47,13 +47,16 @@ CycleMetrics cycleMetrics(const Machine& machine, const CycleRecord& r)
 
     const double q_ref = std::max(std::abs(m.gross_cooling), 0.01 * std::abs(m.pv_power));
     for (std::size_t s = 0; s < net.solids().size(); ++s) {
-        const double q = std::abs(r.averages[net.solidHeatChannel(static_cast<int>(s))]);
+        const int k = net.solids()[s].offset;
+        const int i = static_cast<int>(s);
+        const double q = std::abs(net.solidEnergy(i, r.end_state[k]) -
+                                  net.solidEnergy(i, r.start_state[k])) /
+                         (r.t_end - r.t_start);
         const double rel = q_ref > 0.0 ? q / q_ref : q;
         if (rel > m.heat_residual) {
             m.heat_residual = rel;
             m.worst_solid = net.solids()[s].name;
         }
-        const int k = net.solids()[s].offset;
         m.max_temperature_change =
             std::max(m.max_temperature_change, std::abs(r.end_state[k] - r.start_state[k]));
     }

@@ -8,7 +8,9 @@
 //!   reject_heat     = heat into the reject (aftercooler) wall                     [W]
 //!   energy_balance_error = (PV power + heat in - heat out) / PV power over the cycle
 //!   heat_residual   = max over solid nodes |<net heat>| / Q_ref, Q_ref = max(|gross
-//!                     cooling|, 0.01 PV power): zero at the periodic steady state
+//!                     cooling|, 0.01 PV power): zero at the periodic steady state. The
+//!                     cycle's net heat into a node is the change of its internal energy
+//!                     sum_l m_l h_l(T) over the cycle (NIST c_p integrals), exactly.
 //!   cop = cooling/PV, carnot_fraction = cop / (T_c / (T_h - T_c)).
 
 #include <string>

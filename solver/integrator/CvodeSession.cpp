@@ -22,31 +22,33 @@ std::span<double> mutableViewOf(N_Vector v)
 
 CvodeSession::CvodeSession(const Network& network, const IntegratorOptions& options, double t0,
                            std::span<const double> y0)
-    : m_network(network), m_options(options), m_t(t0)
+    : m_network(network), m_options(options), m_n(network.size()),
+      m_nq(network.nQuadratures()), m_t(t0)
 {
-    const sunindextype n = network.size();
-    if (static_cast<sunindextype>(y0.size()) != n ||
-        static_cast<sunindextype>(options.absolute_tolerances.size()) != n)
+    if (static_cast<int>(y0.size()) != m_n ||
+        static_cast<int>(options.absolute_tolerances.size()) != m_n)
         throw std::invalid_argument("CvodeSession: state or tolerance vector of wrong size");
+    const sunindextype n = m_n + m_nq;
 
     SUNContext ctx = nullptr;
     if (SUNContext_Create(nullptr, &ctx) != 0 || !ctx)
         throw IntegratorError("SUNContext_Create failed", -1, t0, {});
     m_context.reset(ctx);
-
-    auto vector = [&](sunindextype size, const char* what) {
-        N_Vector v = N_VNew_Serial(size, ctx);
-        if (!v) throw IntegratorError(fmt::format("N_VNew_Serial({}) failed", what), -1, t0, {});
-        return v;
-    };
-    m_y.reset(vector(n, "state"));
-    m_atol.reset(vector(n, "tolerances"));
+    m_y.reset(N_VNew_Serial(n, ctx));
+    if (!m_y) throw IntegratorError("N_VNew_Serial failed", -1, t0, {});
+    N_VConst(0.0, m_y.get());
     std::copy(y0.begin(), y0.end(), N_VGetArrayPointer(m_y.get()));
-    std::copy(options.absolute_tolerances.begin(), options.absolute_tolerances.end(),
-              N_VGetArrayPointer(m_atol.get()));
 
-    const SparsityPattern& pattern = network.pattern();
-    m_matrix.reset(SUNSparseMatrix(n, n, pattern.nnz(), CSC_MAT, ctx));
+    // The network's pattern plus a diagonal entry for every accumulator.
+    const SparsityPattern& p = network.pattern();
+    m_column_starts = p.column_starts;
+    m_row_indices = p.row_indices;
+    for (int k = 0; k < m_nq; ++k) {
+        m_row_indices.push_back(m_n + k);
+        m_column_starts.push_back(static_cast<long>(m_row_indices.size()));
+    }
+    const sunindextype nnz = static_cast<sunindextype>(m_row_indices.size());
+    m_matrix.reset(SUNSparseMatrix(n, n, nnz, CSC_MAT, ctx));
     if (!m_matrix) throw IntegratorError("SUNSparseMatrix failed", -1, t0, {});
     m_solver.reset(SUNLinSol_KLU(m_y.get(), m_matrix.get(), ctx));
     if (!m_solver) throw IntegratorError("SUNLinSol_KLU failed", -1, t0, {});
@@ -57,26 +59,14 @@ CvodeSession::CvodeSession(const Network& network, const IntegratorOptions& opti
     check(CVodeSetErrHandlerFn(mem, &CvodeSession::errorHandler, this), "CVodeSetErrHandlerFn");
     check(CVodeInit(mem, &CvodeSession::rhs, t0, m_y.get()), "CVodeInit");
     check(CVodeSetUserData(mem, this), "CVodeSetUserData");
-    check(CVodeSVtolerances(mem, options.relative_tolerance, m_atol.get()), "CVodeSVtolerances");
+    check(CVodeWFtolerances(mem, &CvodeSession::errorWeights), "CVodeWFtolerances");
     check(CVodeSetLinearSolver(mem, m_solver.get(), m_matrix.get()), "CVodeSetLinearSolver");
     check(CVodeSetJacFn(mem, &CvodeSession::jacobian), "CVodeSetJacFn");
     check(CVodeSetMaxOrd(mem, options.max_order), "CVodeSetMaxOrd");
-    if (std::getenv("COLDTIP_STALD")) check(CVodeSetStabLimDet(mem, SUNTRUE), "CVodeSetStabLimDet");
     check(CVodeSetMaxNumSteps(mem, options.max_steps_per_call), "CVodeSetMaxNumSteps");
     if (options.initial_step > 0.0)
         check(CVodeSetInitStep(mem, options.initial_step), "CVodeSetInitStep");
-
-    const int nq = network.nQuadratures();
-    m_scratch.assign(n, 0.0);
-    m_quad_values.assign(nq, 0.0);
-    if (nq > 0) {
-        m_q.reset(vector(nq, "quadratures"));
-        N_VConst(0.0, m_q.get());
-        check(CVodeQuadInit(mem, &CvodeSession::quadratureRhs, m_q.get()), "CVodeQuadInit");
-        // Pure quadratures stay out of the error test (errconQ = false, the default): they
-        // do not steer the step size, and cost one evaluation per step.
-        check(CVodeSetQuadErrCon(mem, SUNFALSE), "CVodeSetQuadErrCon");
-    }
+    m_quad_values.assign(m_nq, 0.0);
 }
 
 CvodeSession::~CvodeSession() = default;
@@ -84,13 +74,9 @@ CvodeSession::~CvodeSession() = default;
 void CvodeSession::reinit(double t0, std::span<const double> y0)
 {
     addCountersTo(m_previous);
+    N_VConst(0.0, m_y.get());
     std::copy(y0.begin(), y0.end(), N_VGetArrayPointer(m_y.get()));
-    void* mem = m_cvode.get();
-    check(CVodeReInit(mem, t0, m_y.get()), "CVodeReInit");
-    if (m_q) {
-        N_VConst(0.0, m_q.get());
-        check(CVodeQuadReInit(mem, m_q.get()), "CVodeQuadReInit");
-    }
+    check(CVodeReInit(m_cvode.get(), t0, m_y.get()), "CVodeReInit");
     m_t = t0;
 }
 
@@ -108,15 +94,15 @@ double CvodeSession::advance(double t_out, double t_stop)
     return m_t;
 }
 
-std::span<const double> CvodeSession::state() const { return viewOf(m_y.get()); }
+std::span<const double> CvodeSession::state() const
+{
+    return viewOf(m_y.get()).first(static_cast<std::size_t>(m_n));
+}
 
 const std::vector<double>& CvodeSession::quadratures()
 {
-    if (!m_q) return m_quad_values;
-    sunrealtype t = 0.0;
-    check(CVodeGetQuad(m_cvode.get(), &t, m_q.get()), "CVodeGetQuad");
-    const auto q = viewOf(m_q.get());
-    std::copy(q.begin(), q.end(), m_quad_values.begin());
+    const double* y = N_VGetArrayPointer(m_y.get());
+    std::copy(y + m_n, y + m_n + m_nq, m_quad_values.begin());
     return m_quad_values;
 }
 
@@ -126,7 +112,6 @@ void CvodeSession::addCountersTo(IntegratorStats& s) const
     long v = 0;
     if (CVodeGetNumSteps(mem, &v) == CV_SUCCESS) s.steps += v;
     if (CVodeGetNumRhsEvals(mem, &v) == CV_SUCCESS) s.rhs_evaluations += v;
-    if (m_q && CVodeGetQuadNumRhsEvals(mem, &v) == CV_SUCCESS) s.rhs_evaluations += v;
     if (CVodeGetNumJacEvals(mem, &v) == CV_SUCCESS) s.jacobian_evaluations += v;
     if (CVodeGetNumLinSolvSetups(mem, &v) == CV_SUCCESS) s.linear_setups += v;
     if (CVodeGetNumErrTestFails(mem, &v) == CV_SUCCESS) s.error_test_failures += v;
@@ -150,7 +135,7 @@ double CvodeSession::lastStep() const
 
 std::vector<std::string> CvodeSession::worstStates(int limit) const
 {
-    const sunindextype n = m_network.size();
+    const sunindextype n = m_n;
     N_Vector w = N_VClone(m_y.get());
     N_Vector e = N_VClone(m_y.get());
     std::vector<std::string> out;
@@ -203,10 +188,11 @@ int CvodeSession::rhs(sunrealtype t, N_Vector y, N_Vector ydot, void* self)
 {
     auto* s = static_cast<CvodeSession*>(self);
     try {
-        const auto yv = viewOf(y);
+        const auto yv = viewOf(y).first(static_cast<std::size_t>(s->m_n));
         s->m_network.checkPhysical(yv);
         const auto rates = mutableViewOf(ydot);
-        s->m_network.evaluate(t, yv, rates, nullptr);
+        s->m_network.evaluate(t, yv, rates.first(static_cast<std::size_t>(s->m_n)),
+                              rates.data() + s->m_n);
         for (double r : rates)
             if (!std::isfinite(r)) return 1; // e.g. a property outside its range: cut the step
         return 0;
@@ -217,15 +203,20 @@ int CvodeSession::rhs(sunrealtype t, N_Vector y, N_Vector ydot, void* self)
     }
 }
 
-int CvodeSession::quadratureRhs(sunrealtype t, N_Vector y, N_Vector yq, void* self)
+int CvodeSession::errorWeights(N_Vector y, N_Vector ewt, void* self)
 {
+    // w_i = 1/(rtol |y_i| + atol_i) for the physical states, scaled by sqrt(N/n) so that a
+    // WRMS norm over all N entries equals the norm over the n physical ones; accumulators
+    // get weight zero (out of the error and convergence tests, like errconQ = false).
     auto* s = static_cast<CvodeSession*>(self);
-    try {
-        s->m_network.evaluate(t, viewOf(y), s->m_scratch, N_VGetArrayPointer(yq));
-        return 0;
-    } catch (...) {
-        return s->callbackFailure(std::current_exception(), false);
-    }
+    const double* yv = N_VGetArrayPointer(y);
+    double* w = N_VGetArrayPointer(ewt);
+    const double rtol = s->m_options.relative_tolerance;
+    const double scale = std::sqrt(static_cast<double>(s->m_n + s->m_nq) / s->m_n);
+    const auto& atol = s->m_options.absolute_tolerances;
+    for (int i = 0; i < s->m_n; ++i) w[i] = scale / (rtol * std::abs(yv[i]) + atol[i]);
+    for (int i = s->m_n; i < s->m_n + s->m_nq; ++i) w[i] = 0.0;
+    return 0;
 }
 
 int CvodeSession::jacobian(sunrealtype t, N_Vector y, N_Vector, SUNMatrix J, void* self,
@@ -238,10 +229,12 @@ int CvodeSession::jacobian(sunrealtype t, N_Vector y, N_Vector, SUNMatrix J, voi
         const SparsityPattern& p = s->m_network.pattern();
         sunindextype* starts = SUNSparseMatrix_IndexPointers(J);
         sunindextype* rows = SUNSparseMatrix_IndexValues(J);
-        std::copy(p.column_starts.begin(), p.column_starts.end(), starts);
-        std::copy(p.row_indices.begin(), p.row_indices.end(), rows);
-        std::span<double> values(SUNSparseMatrix_Data(J), static_cast<std::size_t>(p.nnz()));
-        s->m_network.jacobian(t, viewOf(y), values);
+        std::copy(s->m_column_starts.begin(), s->m_column_starts.end(), starts);
+        std::copy(s->m_row_indices.begin(), s->m_row_indices.end(), rows);
+        double* data = SUNSparseMatrix_Data(J);
+        std::span<double> values(data, static_cast<std::size_t>(p.nnz()));
+        s->m_network.jacobian(t, viewOf(y).first(static_cast<std::size_t>(s->m_n)), values);
+        std::fill(data + p.nnz(), data + s->m_row_indices.size(), 0.0);
         return 0;
     } catch (const RecoverableStateError&) {
         return s->callbackFailure(std::current_exception(), true);

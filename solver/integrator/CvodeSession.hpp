@@ -1,8 +1,14 @@
 #pragma once
 //! \file CvodeSession.hpp
 //! One CVODES integration of a network: BDF with Newton iterations, KLU on the network's
-//! fixed sparsity pattern, the network's exact Jacobian, and the network's cycle integrands
-//! as pure quadratures (excluded from the error test). Every SUNDIALS object is owned by a
+//! fixed sparsity pattern and the network's exact Jacobian. The network's cycle integrands
+//! are integrated as accumulator states appended to the state vector: the right-hand side
+//! computes them with the fluxes at no extra cost (a CVODES pure quadrature would cost one
+//! more network evaluation per step), their Jacobian rows are left empty (each Newton
+//! iterate then carries the integrand of the previous one, an error below the Newton
+//! tolerance), and the error weights exclude them from the error test and the Newton
+//! convergence test exactly as errconQ = false would, while keeping the weighted norms of
+//! the physical states what they would be without them. Every SUNDIALS object is owned by a
 //! unique_ptr with its destroy function, created in dependency order with the context first
 //! so that it is destroyed last; every return code is checked.
 //!
@@ -94,7 +100,7 @@ public:
 
 private:
     static int rhs(sunrealtype t, N_Vector y, N_Vector ydot, void* self);
-    static int quadratureRhs(sunrealtype t, N_Vector y, N_Vector yq, void* self);
+    static int errorWeights(N_Vector y, N_Vector ewt, void* self);
     static int jacobian(sunrealtype t, N_Vector y, N_Vector fy, SUNMatrix J, void* self,
                         N_Vector, N_Vector, N_Vector);
     static void errorHandler(int code, const char* module, const char* function, char* msg,
@@ -117,18 +123,19 @@ private:
     IntegratorOptions m_options;
     // Declaration order is destruction order reversed: the context dies last.
     std::unique_ptr<std::remove_pointer_t<SUNContext>, ContextDeleter> m_context;
-    std::unique_ptr<std::remove_pointer_t<N_Vector>, VectorDeleter> m_y, m_atol, m_q;
+    std::unique_ptr<std::remove_pointer_t<N_Vector>, VectorDeleter> m_y;
     std::unique_ptr<std::remove_pointer_t<SUNMatrix>, MatrixDeleter> m_matrix;
     std::unique_ptr<std::remove_pointer_t<SUNLinearSolver>, SolverDeleter> m_solver;
     std::unique_ptr<void, CvodeDeleter> m_cvode;
 
-    std::vector<double> m_scratch;   //!< rates computed alongside the quadrature integrands
+    int m_n = 0;                     //!< physical states
+    int m_nq = 0;                    //!< accumulators
+    std::vector<long> m_column_starts, m_row_indices; //!< pattern with the accumulators' diagonal
     std::vector<double> m_quad_values;
     std::exception_ptr m_callback_error;
     std::string m_last_message;
     double m_t = 0.0;
     IntegratorStats m_previous; //!< counters of earlier (re)initialisations
-    long m_quad_rhs = 0;        //!< quadrature right-hand sides since the last reinit
 };
 
 } // namespace coldtip

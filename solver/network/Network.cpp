@@ -45,11 +45,6 @@ int Network::addSolid(SolidNode node)
     node.offset = m_n++;
     const int index = static_cast<int>(m_solids.size());
     m_state_info.push_back({StateKind::SolidTemperature, index});
-    QuadratureChannel q;
-    q.name = node.name + ".net_heat";
-    q.kind = QuadratureChannel::Kind::SolidNetHeat;
-    q.component = node.component;
-    m_solid_quad.push_back(addQuadrature(q));
     m_solids.push_back(std::move(node));
     return index;
 }
@@ -201,6 +196,13 @@ std::vector<double> Network::absoluteTolerances(double total_mass, double rtol,
     for (const SolidNode& s : m_solids) atol[s.offset] = rtol * s.initial_temperature;
     for (double& a : atol) a *= scale;
     return atol;
+}
+
+double Network::solidEnergy(int i, double T) const
+{
+    double U = 0.0;
+    for (const SolidLayer& l : m_solids.at(i).layers) U += l.mass * l.material->enthalpy(T);
+    return U;
 }
 
 double Network::totalMass(std::span<const double> y) const

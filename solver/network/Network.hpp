@@ -59,8 +59,6 @@ public:
 
     // ---- phase 2: elements and cycle-integral channels ------------------------------------
     int addQuadrature(QuadratureChannel channel);
-    //! Channel of the net heat into solid node i (created with the node).
-    int solidHeatChannel(int solid) const { return m_solid_quad.at(solid); }
     template <class E, class... Args>
     E& addElement(Args&&... args)
     {
@@ -96,6 +94,9 @@ public:
                                            double mass_flow_scale, double scale) const;
     //! Total gas mass [kg] of a state.
     double totalMass(std::span<const double> y) const;
+    //! Internal energy of solid node i at temperature T, sum of m_l h_l(T) [J]; the change
+    //! over a cycle is the cycle-integrated net heat into the node.
+    double solidEnergy(int i, double T) const;
     //! Names of any non-finite rates (at most `limit`), empty if all are finite.
     std::vector<std::string> nonFinite(std::span<const double> ydot, int limit = 10) const;
     //! Throws RecoverableStateError if a trial state has non-positive mass, energy or solid
@@ -128,7 +129,6 @@ private:
     std::vector<ThermalBoundary> m_boundaries;
     std::vector<ComponentSlice> m_components;
     std::vector<QuadratureChannel> m_quad;
-    std::vector<int> m_solid_quad;
     std::vector<std::unique_ptr<Element>> m_elements;
     SparsityPattern m_pattern;
     int m_n = 0;

@@ -15,12 +15,10 @@ struct QuadratureChannel {
     enum class Kind {
         PvWork,          //!< work done on the gas by a moving boundary [W]
         EnthalpyFlow,    //!< mdot h through a face, positive downstream [W]
-        MassFlow,        //!< mdot through a face [kg/s]
-        GasConduction,   //!< axial gas conduction through a face, downstream [W]
-        WallHeat,        //!< heat from a wall/matrix into the gas of one cell [W]
-        SolidConduction, //!< heat conducted from one solid node to the next [W]
+        GasConduction,   //!< axial gas conduction through a junction face, downstream [W]
+        WallHeat,        //!< heat from the walls/matrix of one component into its gas [W]
+        SolidConduction, //!< heat conducted from a solid end into a neighbour's wall [W]
         AppliedLoad,     //!< heat applied to a body from outside [W]
-        SolidNetHeat,    //!< net heat into one solid node [W] (zero at periodic steady state)
     };
     std::string name;
     Kind kind = Kind::WallHeat;

@@ -161,7 +161,6 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
     series(K::EnthalpyFlow, "/profile/enthalpy_flow", "W");
     series(K::GasConduction, "/profile/gas_conduction", "W");
     series(K::WallHeat, "/profile/wall_heat", "W");
-    series(K::SolidNetHeat, "/profile/solid_net_heat", "W");
 
     const CycleSamples& s = out.samples;
     const std::size_t n = s.time.size();

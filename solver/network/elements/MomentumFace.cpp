@@ -9,10 +9,10 @@ namespace coldtip {
 
 MomentumFace::MomentumFace(const FlowFace& face, int face_index, int before, int after,
                            const std::vector<GasCell>& cells, int quad_enthalpy,
-                           int quad_mass, int quad_conduction)
+                           int quad_conduction)
     : m_face(face), m_index(face_index), m_before(before), m_after(after),
       m_a(&cells.at(face.from)), m_b(&cells.at(face.to)), m_quad_h(quad_enthalpy),
-      m_quad_m(quad_mass), m_quad_q(quad_conduction)
+      m_quad_q(quad_conduction)
 {
     if (before >= 0) m_before_cell = &cells.at(before);
     if (after >= 0) m_after_cell = &cells.at(after);
@@ -103,8 +103,7 @@ void MomentumFace::evaluate(const NetworkView& v, double* ydot, double* quad) co
     for (int o = 0; o < 5; ++o) ydot[m_stencil.output(o)] += r.rate[o];
     if (quad) {
         quad[m_quad_h] += r.enthalpy_flow;
-        quad[m_quad_m] += v.y[m_face.offset];
-        quad[m_quad_q] += r.conduction;
+        if (m_quad_q >= 0) quad[m_quad_q] += r.conduction;
     }
 }
 

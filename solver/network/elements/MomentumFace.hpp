@@ -30,10 +30,9 @@ class MomentumFace final : public Element {
 public:
     //! `face` indexes the network's faces; `before` is the cell upstream of face.from and
     //! `after` the cell downstream of face.to (-1 if none), for the reconstruction;
-    //! quadrature channels for H, mdot and Q.
+    //! quadrature channels for the enthalpy flow and the gas conduction (-1: none).
     MomentumFace(const FlowFace& face, int face_index, int before, int after,
-                 const std::vector<GasCell>& cells, int quad_enthalpy, int quad_mass,
-                 int quad_conduction);
+                 const std::vector<GasCell>& cells, int quad_enthalpy, int quad_conduction);
 
     std::string describe() const override;
     void evaluate(const NetworkView& v, double* ydot, double* quad) const override;
@@ -63,7 +62,7 @@ private:
     const GasCell* m_before_cell = nullptr;
     const GasCell* m_after_cell = nullptr;
     double m_inertance = 0.0;
-    int m_quad_h, m_quad_m, m_quad_q;
+    int m_quad_h, m_quad_q;
 };
 
 } // namespace coldtip

@@ -5,9 +5,9 @@
 namespace coldtip {
 
 OrificeLink::OrificeLink(std::string name, int from, int to, double discharge_area,
-                         const std::vector<GasCell>& cells, int quad_enthalpy, int quad_mass)
+                         const std::vector<GasCell>& cells, int quad_enthalpy)
     : m_name(std::move(name)), m_from(from), m_to(to), m_discharge_area(discharge_area),
-      m_a(&cells.at(from)), m_b(&cells.at(to)), m_quad_h(quad_enthalpy), m_quad_m(quad_mass)
+      m_a(&cells.at(from)), m_b(&cells.at(to)), m_quad_h(quad_enthalpy)
 {
     for (int col : {m_a->offset, m_a->offset + 1, m_b->offset, m_b->offset + 1})
         m_stencil.addInput(col);
@@ -61,10 +61,7 @@ void OrificeLink::evaluate(const NetworkView& v, double* ydot, double* quad) con
 {
     const Result<double> r = compute((*v.gas)[m_from], (*v.gas)[m_to], v);
     for (int o = 0; o < 4; ++o) ydot[m_stencil.output(o)] += r.rate[o];
-    if (quad) {
-        quad[m_quad_h] += r.enthalpy_flow;
-        quad[m_quad_m] += r.mass_flow;
-    }
+    if (quad) quad[m_quad_h] += r.enthalpy_flow;
 }
 
 void OrificeLink::addJacobian(const NetworkView& v, double* values) const

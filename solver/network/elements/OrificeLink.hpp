@@ -13,7 +13,7 @@ class OrificeLink final : public Element {
 public:
     //! Flow from cell `from` to cell `to` through an opening of discharge area C_d A [m^2].
     OrificeLink(std::string name, int from, int to, double discharge_area,
-                const std::vector<GasCell>& cells, int quad_enthalpy, int quad_mass);
+                const std::vector<GasCell>& cells, int quad_enthalpy);
     std::string describe() const override;
     void evaluate(const NetworkView& v, double* ydot, double* quad) const override;
     void addJacobian(const NetworkView& v, double* values) const override;
@@ -36,7 +36,7 @@ private:
     double m_discharge_area;
     const GasCell* m_a;
     const GasCell* m_b;
-    int m_quad_h, m_quad_m;
+    int m_quad_h;
 };
 
 } // namespace coldtip

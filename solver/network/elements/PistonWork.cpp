@@ -28,10 +28,8 @@ void PistonWork::addJacobian(const NetworkView& v, double* values) const
     m_stencil.scatter(&power, values);
 }
 
-HeatLoad::HeatLoad(int solid, double load, const std::vector<SolidNode>& solids, int quad_load,
-                   int quad_solid)
-    : m_solid(solid), m_load(load), m_s(&solids.at(solid)), m_quad_load(quad_load),
-      m_quad_solid(quad_solid)
+HeatLoad::HeatLoad(int solid, double load, const std::vector<SolidNode>& solids, int quad_load)
+    : m_solid(solid), m_load(load), m_s(&solids.at(solid)), m_quad_load(quad_load)
 {
     m_stencil.addInput(m_s->offset);
     m_stencil.addOutput(m_s->offset);
@@ -43,10 +41,7 @@ std::string HeatLoad::describe() const { return "applied load on " + m_s->name; 
 void HeatLoad::evaluate(const NetworkView& v, double* ydot, double* quad) const
 {
     ydot[m_s->offset] += m_load / (*v.solid)[m_solid].C;
-    if (quad) {
-        quad[m_quad_load] += m_load;
-        quad[m_quad_solid] += m_load;
-    }
+    if (quad) quad[m_quad_load] += m_load;
 }
 
 void HeatLoad::addJacobian(const NetworkView& v, double* values) const

@@ -24,8 +24,7 @@ private:
 //! dT/dt += Q_load / C(T).
 class HeatLoad final : public Element {
 public:
-    HeatLoad(int solid, double load, const std::vector<SolidNode>& solids, int quad_load,
-             int quad_solid);
+    HeatLoad(int solid, double load, const std::vector<SolidNode>& solids, int quad_load);
     std::string describe() const override;
     void evaluate(const NetworkView& v, double* ydot, double* quad) const override;
     void addJacobian(const NetworkView& v, double* values) const override;
@@ -36,7 +35,7 @@ private:
     int m_solid;
     double m_load;
     const SolidNode* m_s;
-    int m_quad_load, m_quad_solid;
+    int m_quad_load;
 };
 
 } // namespace coldtip

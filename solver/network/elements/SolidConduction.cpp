@@ -5,10 +5,9 @@
 namespace coldtip {
 
 SolidConduction::SolidConduction(int i, int j, double wall_temperature,
-                                 const std::vector<SolidNode>& solids, int quad_heat,
-                                 int quad_solid_i, int quad_solid_j)
+                                 const std::vector<SolidNode>& solids, int quad_heat)
     : m_i(i), m_j(j), m_wall_temperature(wall_temperature), m_a(&solids.at(i)),
-      m_quad_heat(quad_heat), m_quad_i(quad_solid_i), m_quad_j(quad_solid_j)
+      m_quad_heat(quad_heat)
 {
     if (j >= 0) m_b = &solids.at(j);
     const bool resistive = m_a->length > 0.0 || (m_b && m_b->length > 0.0);
@@ -47,11 +46,7 @@ void SolidConduction::evaluate(const NetworkView& v, double* ydot, double* quad)
     const double Q = heatFlow(solid[m_i], m_b ? &solid[m_j] : nullptr);
     ydot[m_a->offset] -= Q / solid[m_i].C;
     if (m_b) ydot[m_b->offset] += Q / solid[m_j].C;
-    if (quad) {
-        quad[m_quad_heat] += Q;
-        quad[m_quad_i] -= Q;
-        if (m_b) quad[m_quad_j] += Q;
-    }
+    if (quad && m_quad_heat >= 0) quad[m_quad_heat] += Q;
 }
 
 void SolidConduction::addJacobian(const NetworkView& v, double* values) const

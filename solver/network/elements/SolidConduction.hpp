@@ -14,9 +14,10 @@ namespace coldtip {
 
 class SolidConduction final : public Element {
 public:
-    //! From node `i` to node `j`; j < 0 means a wall held at `wall_temperature`.
+    //! From node `i` to node `j`; j < 0 means a wall held at `wall_temperature`; quadrature
+    //! channel of the heat flow (-1: none).
     SolidConduction(int i, int j, double wall_temperature, const std::vector<SolidNode>& solids,
-                    int quad_heat, int quad_solid_i, int quad_solid_j);
+                    int quad_heat);
     std::string describe() const override;
     void evaluate(const NetworkView& v, double* ydot, double* quad) const override;
     void addJacobian(const NetworkView& v, double* values) const override;
@@ -29,7 +30,7 @@ private:
     double m_wall_temperature;
     const SolidNode* m_a;
     const SolidNode* m_b = nullptr;
-    int m_quad_heat, m_quad_i, m_quad_j;
+    int m_quad_heat;
 };
 
 } // namespace coldtip

@@ -10,10 +10,9 @@ namespace coldtip {
 WallHeatTransfer::WallHeatTransfer(int cell, int face_in, int face_out, int solid,
                                    double wall_temperature, const std::vector<GasCell>& cells,
                                    const std::vector<FlowFace>& faces,
-                                   const std::vector<SolidNode>& solids, int quad_heat,
-                                   int quad_solid)
+                                   const std::vector<SolidNode>& solids, int quad_heat)
     : m_cell(cell), m_solid(solid), m_wall_temperature(wall_temperature), m_c(&cells.at(cell)),
-      m_quad_heat(quad_heat), m_quad_solid(quad_solid)
+      m_quad_heat(quad_heat)
 {
     if (!m_c->passage || m_c->length <= 0.0)
         throw std::logic_error("wall heat transfer needs a passage cell: " + m_c->name);
@@ -67,10 +66,7 @@ void WallHeatTransfer::evaluate(const NetworkView& v, double* ydot, double* quad
     const double Q = heatToGas((*v.gas)[m_cell], m_in, m_out, Ts, v);
     ydot[m_c->offset + 1] += Q;
     if (m_solid >= 0) ydot[m_stencil.output(1)] -= Q / (*v.solid)[m_solid].C;
-    if (quad) {
-        quad[m_quad_heat] += Q;
-        if (m_solid >= 0) quad[m_quad_solid] -= Q;
-    }
+    if (quad && m_quad_heat >= 0) quad[m_quad_heat] += Q;
 }
 
 void WallHeatTransfer::addJacobian(const NetworkView& v, double* values) const

@@ -18,7 +18,7 @@ public:
     //! into the gas of `cell`, whose faces are `face_in`, `face_out` (-1 if absent).
     WallHeatTransfer(int cell, int face_in, int face_out, int solid, double wall_temperature,
                      const std::vector<GasCell>& cells, const std::vector<FlowFace>& faces,
-                     const std::vector<SolidNode>& solids, int quad_heat, int quad_solid);
+                     const std::vector<SolidNode>& solids, int quad_heat);
 
     std::string describe() const override;
     void evaluate(const NetworkView& v, double* ydot, double* quad) const override;
@@ -39,7 +39,7 @@ private:
     double m_wall_temperature;
     double m_area = 0.0;
     const GasCell* m_c;
-    int m_quad_heat, m_quad_solid;
+    int m_quad_heat;
 };
 
 //! Heat exchange with a given film coefficient h between a lumped gas volume and a wall at
