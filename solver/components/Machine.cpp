@@ -89,7 +89,7 @@ Machine::Machine(const CaseDescription& description) : m_description(description
     joinComponents(ctx, T_in, T_out);
     for (std::size_t k = 0; k < m_components.size(); ++k)
         m_components[k]->addElements(ctx);
-    addJunctionLaws(ctx);
+    addJunctionLaws();
     addLinks();
     m_network->finalize();
 
@@ -187,7 +187,7 @@ void Machine::joinComponents(AssemblyContext& ctx, const std::vector<double>& T_
     }
 }
 
-void Machine::addJunctionLaws(AssemblyContext& ctx)
+void Machine::addJunctionLaws()
 {
     Network& net = *m_network;
     const int n = static_cast<int>(m_components.size());

@@ -60,7 +60,7 @@ private:
     //! Phase 1 for every component, and a face wherever two components with gas meet.
     void joinComponents(AssemblyContext& ctx, const std::vector<double>& T_in,
                         const std::vector<double>& T_out);
-    void addJunctionLaws(AssemblyContext& ctx);
+    void addJunctionLaws();
     void addLinks();
     [[noreturn]] void fail(const SourceMark& mark, const std::string& problem,
                            const std::string& expected) const;

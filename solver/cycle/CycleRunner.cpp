@@ -19,8 +19,15 @@ IntegratorOptions CycleRunner::optionsFor(const Machine& machine)
 CycleRunner::CycleRunner(Machine& machine, const IntegratorOptions& options)
     : m_machine(machine),
       m_session(machine.network(), options, 0.0, machine.initialState()),
-      m_quad_at_start(machine.network().nQuadratures(), 0.0)
+      m_quad_at_start(machine.network().nQuadratures(), 0.0),
+      m_max_steps(machine.description().solver.max_steps_per_cycle)
 {
+}
+
+void CycleRunner::advanceWithin(double t, double t_end, long steps_at_start)
+{
+    m_session.setMaxSteps(m_max_steps - (m_session.stats().steps - steps_at_start));
+    m_session.advance(t, t_end);
 }
 
 void CycleRunner::start(long period_index, std::span<const double> y)
@@ -45,13 +52,13 @@ CycleRecord CycleRunner::runCycle(CycleSamples* samples, int n_samples)
         samples->state.assign(n_samples, {});
         for (int j = 0; j < n_samples; ++j) {
             const double t = r.t_start + j * T / n_samples;
-            if (j > 0) m_session.advance(t, r.t_end);
+            if (j > 0) advanceWithin(t, r.t_end, before.steps);
             const auto y = m_session.state();
             samples->time[j] = t;
             samples->state[j].assign(y.begin(), y.end());
         }
     }
-    m_session.advance(r.t_end, r.t_end);
+    advanceWithin(r.t_end, r.t_end, before.steps);
 
     const std::vector<double>& q = m_session.quadratures();
     r.averages.resize(q.size());

@@ -32,6 +32,9 @@ class CycleRunner {
 public:
     CycleRunner(Machine& machine, const IntegratorOptions& options);
 
+    //! Advance to t within the current cycle, charging its steps to the cycle's budget.
+    void advanceWithin(double t, double t_end, long steps_at_start);
+
     //! Options from the case: tolerances with absolute scales from the machine.
     static IntegratorOptions optionsFor(const Machine& machine);
 
@@ -50,6 +53,7 @@ private:
     long m_period = 0;   //!< index of the period about to be integrated
     long m_cycles = 0;   //!< periods integrated so far
     std::vector<double> m_quad_at_start;
+    long m_max_steps;    //!< integrator steps allowed per cycle
 };
 
 } // namespace coldtip

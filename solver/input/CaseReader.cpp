@@ -349,6 +349,7 @@ SolverSpec readSolver(const MapReader& m)
     solver.relative_tolerance = m.quantity("relative_tolerance");
     solver.absolute_tolerance_scale = m.quantity("absolute_tolerance_scale");
     solver.max_order = m.integer("max_order");
+    solver.max_steps_per_cycle = m.integer("max_steps_per_cycle");
     const MapReader steady = m.map("steady");
     solver.steady.method = steady.choice("method");
     solver.steady.heat_residual = steady.quantity("heat_residual");

@@ -302,7 +302,12 @@ std::vector<KeyTable> buildTables()
           quantity("absolute_tolerance_scale", D::Dimensionless, kPositive,
                    "multiplies the built-in absolute tolerances")
               .def("1"),
-          integer("max_order", Range::closed(1, 5), "highest BDF order").def("5"),
+          integer("max_order", Range::closed(1, 5),
+                  "highest BDF order (above 2, lightly damped acoustic modes destabilise BDF)")
+              .def("2"),
+          integer("max_steps_per_cycle", Range::atLeast(10),
+                  "integrator steps allowed in one cycle before the run fails")
+              .def("100000"),
           map("steady", {Table::Steady}, "when the cycle counts as repeating")}},
         {Table::Steady,
          "solver.steady",

@@ -126,6 +126,11 @@ IntegratorStats CvodeSession::stats() const
     return s;
 }
 
+void CvodeSession::setMaxSteps(long steps)
+{
+    check(CVodeSetMaxNumSteps(m_cvode.get(), std::max(1L, steps)), "CVodeSetMaxNumSteps");
+}
+
 double CvodeSession::lastStep() const
 {
     sunrealtype h = 0.0;

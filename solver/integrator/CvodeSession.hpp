@@ -95,6 +95,8 @@ public:
     IntegratorStats stats() const;
     //! Last step size taken [s].
     double lastStep() const;
+    //! Steps CVODE may take within the next advance() calls (CV_TOO_MUCH_WORK beyond).
+    void setMaxSteps(long steps);
 
     const Network& network() const { return m_network; }
 

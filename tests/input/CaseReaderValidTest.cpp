@@ -145,7 +145,8 @@ TEST_CASE("a valid case file is read into SI units", "[input]")
 
     CHECK(c.solver.relative_tolerance == Approx(1e-7));
     CHECK(c.solver.absolute_tolerance_scale == Approx(1.0));
-    CHECK(c.solver.max_order == 5);
+    CHECK(c.solver.max_order == 2);
+    CHECK(c.solver.max_steps_per_cycle == 100000);
     CHECK(c.solver.steady.method == "accelerated");
     CHECK(c.solver.steady.heat_residual == Approx(1e-3));
     CHECK(c.solver.steady.energy_residual == Approx(2e-3));
