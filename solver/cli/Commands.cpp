@@ -11,6 +11,7 @@
 #include "solver/cli/Progress.hpp"
 #include "solver/components/Machine.hpp"
 #include "solver/cycle/PeriodicSteadyState.hpp"
+#include "solver/cycle/ShootingNewton.hpp"
 #include "solver/input/CaseReader.hpp"
 #include "solver/output/ResultFile.hpp"
 
@@ -78,8 +79,7 @@ int runCommand(const RunOptions& opt, const RunInfo& info)
         writeRunResult(out_path, machine, s, summary, info);
         return summary;
     };
-    SteadyOutcome out = integrateToSteadyState(
-        runner, period, y0, o, [&](const SteadyOutcome& s) {
+    auto on_cycle = [&](const SteadyOutcome& s) {
             const CycleMetrics& m = s.metrics;
             progress.cycle(s.history.back().cycle, m.cold_temperature, m.cooling_power,
                            m.heat_residual, o.heat_residual, s.wall_time_s);
@@ -90,8 +90,20 @@ int runCommand(const RunOptions& opt, const RunInfo& info)
                 last_save = now;
             }
             return !g_interrupted.load();
-        });
+        };
+    ShootingReport report;
+    SteadyOutcome out = d.solver.steady.method == "accelerated"
+                            ? shootToSteadyState(runner, period, y0, o, ShootingOptions{}, report,
+                                                 on_cycle)
+                            : integrateToSteadyState(runner, period, y0, o, on_cycle);
     progress.finish();
+    if (d.solver.steady.method == "accelerated")
+        for (int i = 0; i < report.newton_iterations; ++i) {
+            std::string mu;
+            for (auto m : report.floquet[i].multipliers) mu += fmt::format(" {:.5f}", std::abs(m));
+            progress.note(fmt::format("newton {}: residual {:.3e} K, {} krylov, |mu|{}", i + 1,
+                                      report.residual_norm[i], report.krylov_iterations[i], mu));
+        }
 
     std::string status = out.converged ? "converged" : "max-cycles";
     if (g_interrupted) status = "interrupted";

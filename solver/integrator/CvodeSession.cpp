@@ -179,6 +179,11 @@ void CvodeSession::check(int flag, const char* call)
     }
     std::vector<std::string> worst;
     if (m_cvode && flag != CV_MEM_NULL) worst = worstStates(10);
+    if (!worst.empty()) {
+        what += "; largest local errors in";
+        for (std::size_t i = 0; i < std::min<std::size_t>(worst.size(), 5); ++i)
+            what += (i ? ", " : " ") + worst[i];
+    }
     throw IntegratorError(what, flag, t, std::move(worst));
 }
 

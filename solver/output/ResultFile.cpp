@@ -231,6 +231,7 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
 
 std::string unitsOf(const std::string& key)
 {
+    if (key.ends_with("_per_s")) return "1/s";
     if (key.ends_with("_W")) return "W";
     if (key.ends_with("_K")) return "K";
     if (key.ends_with("_Hz")) return "Hz";
