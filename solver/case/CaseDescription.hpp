@@ -128,9 +128,10 @@ struct LinkSpec {
 
 //! Periodic-steady-state controls.
 struct SteadySpec {
-    std::string method = "plain";      //!< plain | accelerated
+    std::string method = "accelerated"; //!< accelerated | plain
     double heat_residual = 1e-3;       //!< [-] max |cycle heat of a solid node| / cooling power
     double energy_residual = 2e-3;     //!< [-] |energy balance error| (relative to PV power)
+    double temperature_tolerance = 0.05; //!< [K] estimated distance to the steady state
     int max_cycles = 20000;
     int min_cycles = 5;
 };

@@ -41,6 +41,7 @@ SteadyOptions steadyOptions(const CaseDescription& d, long max_cycles)
     o.min_cycles = d.solver.steady.min_cycles;
     o.heat_residual = d.solver.steady.heat_residual;
     o.energy_residual = d.solver.steady.energy_residual;
+    o.temperature_tolerance = d.solver.steady.temperature_tolerance;
     o.samples_per_cycle = d.output.samples_per_cycle;
     return o;
 }

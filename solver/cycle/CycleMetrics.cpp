@@ -60,6 +60,12 @@ CycleMetrics cycleMetrics(const Machine& machine, const CycleRecord& r)
         m.max_temperature_change =
             std::max(m.max_temperature_change, std::abs(r.end_state[k] - r.start_state[k]));
     }
+    const double cv = net.gas().cv;
+    for (const GasCell& c : net.cells()) {
+        const double T0 = r.start_state[c.offset + 1] / (r.start_state[c.offset] * cv);
+        const double T1 = r.end_state[c.offset + 1] / (r.end_state[c.offset] * cv);
+        m.max_temperature_change = std::max(m.max_temperature_change, std::abs(T1 - T0));
+    }
     m.cold_temperature = boundaryTemperature(machine, r.end_state, cold);
     m.reject_temperature = boundaryTemperature(machine, r.end_state, reject);
     if (m.pv_power != 0.0) m.cop = m.cooling_power / m.pv_power;

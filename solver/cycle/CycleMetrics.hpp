@@ -34,7 +34,10 @@ struct CycleMetrics {
     std::string worst_solid;      //!< node with the largest residual
     double cold_temperature = 0.0;
     double reject_temperature = 0.0;
-    double max_temperature_change = 0.0; //!< max |T_s(end) - T_s(start)| over solids [K]
+    double max_temperature_change = 0.0; //!< max |T(end) - T(start)|, solids and gas [K]
+    //! Estimated distance to the periodic steady state [K]: set by the steady-state driver
+    //! (geometric extrapolation of the change per cycle, or the last Newton correction).
+    double distance_estimate = 0.0;
     double cop = 0.0;
     double carnot_fraction = 0.0;
     double mass_change = 0.0; //!< relative change of total gas mass over the cycle

@@ -28,7 +28,20 @@ std::vector<double> boundaryEnthalpy(const Machine& machine, const std::vector<d
 bool steadyStateReached(const CycleMetrics& m, const SteadyOptions& o, long cycles)
 {
     return cycles >= o.min_cycles && m.heat_residual <= o.heat_residual &&
-           std::abs(m.energy_balance_error) <= o.energy_residual;
+           std::abs(m.energy_balance_error) <= o.energy_residual &&
+           m.distance_estimate <= o.temperature_tolerance;
+}
+
+double DistanceEstimate::add(double change)
+{
+    m_changes.push_back(change);
+    const std::size_t n = m_changes.size();
+    const std::size_t span = std::min<std::size_t>(10, n - 1);
+    if (span < 2 || change <= 0.0) return change <= 0.0 ? 0.0 : HUGE_VAL;
+    const double before = m_changes[n - 1 - span];
+    if (!(before > change)) return HUGE_VAL;
+    const double mu = std::pow(change / before, 1.0 / span);
+    return change * mu / (1.0 - mu);
 }
 
 SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
@@ -42,6 +55,7 @@ SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
     out.period_index = period_index;
     runner.start(period_index, y0);
     const Machine& machine = runner.machine();
+    DistanceEstimate distance;
     for (long n = 1; n <= options.max_cycles; ++n) {
         CycleSamples samples;
         CycleRecord record;
@@ -56,6 +70,7 @@ SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
         row.cycle = record.cycle;
         row.time = record.t_end;
         row.metrics = cycleMetrics(machine, record);
+        row.metrics.distance_estimate = distance.add(row.metrics.max_temperature_change);
         row.work = record.work;
         row.boundary_enthalpy = boundaryEnthalpy(machine, record.averages);
         row.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();

@@ -6,8 +6,14 @@
 //! The cycle is converged when
 //!   - every solid node's cycle-integrated net heat is small against the cooling power
 //!     (heat_residual, CycleMetrics), and
-//!   - the machine's energy balance closes (|energy_balance_error| <= energy_residual),
-//! after at least min_cycles periods.
+//!   - the machine's energy balance closes (|energy_balance_error| <= energy_residual), and
+//!   - the estimated distance to the steady state is below temperature_tolerance: the
+//!     first two can hold while a slow mode (a thin tube wall of small heat capacity, with a
+//!     time constant of 10^4 cycles) is still tens of kelvin away,
+//! after at least min_cycles periods. Plain integration estimates the distance by
+//! geometric extrapolation of the largest temperature change per cycle d_n with the decay
+//! ratio mu of the last cycles, d_n mu / (1 - mu) (Aitken's delta-squared idea; the
+//! dominant-eigenvalue method of Crowe & Nishio, AIChE J. 1975).
 
 #include <functional>
 #include <string>
@@ -23,7 +29,19 @@ struct SteadyOptions {
     long min_cycles = 5;
     double heat_residual = 1e-3;
     double energy_residual = 2e-3;
+    double temperature_tolerance = 0.05; //!< [K] estimated distance to the steady state
     int samples_per_cycle = 96;
+};
+
+//! Distance to the steady state from the largest temperature change per cycle.
+class DistanceEstimate {
+public:
+    //! Add cycle n's largest change d_n [K]; returns the estimated distance [K] (infinite
+    //! until the change decays geometrically).
+    double add(double change);
+
+private:
+    std::vector<double> m_changes;
 };
 
 //! One row of the per-cycle history.

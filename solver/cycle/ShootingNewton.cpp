@@ -7,41 +7,96 @@
 
 namespace coldtip {
 
-SlowSubspace::SlowSubspace(const Network& network)
+ShootingVariables::ShootingVariables(const Network& network, double charge_pressure,
+                                     double mass_flow_scale)
     : m_network(network),
-      m_n(static_cast<int>(network.cells().size() + network.solids().size()))
+      m_n(static_cast<int>(2 * network.cells().size() + network.faces().size() +
+                           network.solids().size())),
+      m_p_unit(charge_pressure / kReferenceTemperature),
+      m_mdot_unit(mass_flow_scale / kReferenceTemperature)
 {
 }
 
-std::vector<double> SlowSubspace::extract(std::span<const double> y) const
+std::vector<double> ShootingVariables::extract(std::span<const double> y) const
 {
+    const GasProperties& gas = m_network.gas();
     std::vector<double> x;
     x.reserve(m_n);
-    const double cv = m_network.gas().cv;
-    for (const GasCell& c : m_network.cells()) x.push_back(y[c.offset + 1] / (y[c.offset] * cv));
+    for (const GasCell& c : m_network.cells()) {
+        x.push_back((gas.gamma - 1.0) * y[c.offset + 1] / c.volumeAt(0.0) / m_p_unit);
+        x.push_back(y[c.offset + 1] / (y[c.offset] * gas.cv));
+    }
+    for (const FlowFace& f : m_network.faces()) x.push_back(y[f.offset] / m_mdot_unit);
     for (const SolidNode& s : m_network.solids()) x.push_back(y[s.offset]);
     return x;
 }
 
-void SlowSubspace::add(std::vector<double>& y, const std::vector<double>& dx, double scale) const
+void ShootingVariables::add(std::vector<double>& y, const std::vector<double>& dx) const
 {
-    // Gas: change T at the cell's own pressure (E = p V c_v / R stays, the mass moves), then
-    // scale every cell's m and E by one factor to restore the charge. A change at fixed
-    // mass would change the pressure cell by cell and start violent acoustic transients.
-    const double cv = m_network.gas().cv;
+    // New pressure and temperature per cell give m = p V/(R T), E = p V c_v/R; one common
+    // factor on every m and E then restores the charge (mass is a constraint, not an
+    // unknown: the map has a unit multiplier along it).
+    const GasProperties& gas = m_network.gas();
     const double mass = m_network.totalMass(y);
     std::size_t i = 0;
     for (const GasCell& c : m_network.cells()) {
-        const double T = y[c.offset + 1] / (y[c.offset] * cv);
-        const double T_new = std::max(T + scale * dx[i++], 0.5 * T);
-        y[c.offset] *= T / T_new;
+        const double V = c.volumeAt(0.0);
+        const double p = (gas.gamma - 1.0) * y[c.offset + 1] / V;
+        const double T = y[c.offset + 1] / (y[c.offset] * gas.cv);
+        const double p_new = std::max(p + dx[i++] * m_p_unit, 0.5 * p);
+        const double T_new = std::max(T + dx[i++], 0.5 * T);
+        y[c.offset] = p_new * V / (gas.R * T_new);
+        y[c.offset + 1] = p_new * V * gas.cv / gas.R;
     }
     const double f = mass / m_network.totalMass(y);
     for (const GasCell& c : m_network.cells()) {
         y[c.offset] *= f;
         y[c.offset + 1] *= f;
     }
-    for (const SolidNode& s : m_network.solids()) y[s.offset] += scale * dx[i++];
+    for (const FlowFace& face : m_network.faces()) y[face.offset] += dx[i++] * m_mdot_unit;
+    for (const SolidNode& s : m_network.solids()) y[s.offset] += dx[i++];
+}
+
+std::vector<double> ShootingVariables::liftDirection(std::span<const double> y,
+                                                     const std::vector<double>& v) const
+{
+    const GasProperties& gas = m_network.gas();
+    std::vector<double> d(y.size(), 0.0);
+    double dm_total = 0.0, mass = 0.0;
+    std::size_t i = 0;
+    for (const GasCell& c : m_network.cells()) {
+        const double V = c.volumeAt(0.0);
+        const double m = y[c.offset], E = y[c.offset + 1];
+        const double p = (gas.gamma - 1.0) * E / V, T = E / (m * gas.cv);
+        const double dp = v[i++] * m_p_unit, dT = v[i++];
+        d[c.offset] = m * (dp / p - dT / T);
+        d[c.offset + 1] = E * dp / p;
+        dm_total += d[c.offset];
+        mass += m;
+    }
+    for (const GasCell& c : m_network.cells()) {
+        d[c.offset] -= y[c.offset] * dm_total / mass;
+        d[c.offset + 1] -= y[c.offset + 1] * dm_total / mass;
+    }
+    for (const FlowFace& f : m_network.faces()) d[f.offset] = v[i++] * m_mdot_unit;
+    for (const SolidNode& s : m_network.solids()) d[s.offset] = v[i++];
+    return d;
+}
+
+std::vector<double> ShootingVariables::extractDirection(std::span<const double> y,
+                                                        std::span<const double> s) const
+{
+    const GasProperties& gas = m_network.gas();
+    std::vector<double> dx;
+    dx.reserve(m_n);
+    for (const GasCell& c : m_network.cells()) {
+        const double m = y[c.offset], E = y[c.offset + 1];
+        dx.push_back((gas.gamma - 1.0) * s[c.offset + 1] / c.volumeAt(0.0) / m_p_unit);
+        dx.push_back((s[c.offset + 1] - E / m * s[c.offset]) / (m * gas.cv));
+    }
+    for (const FlowFace& f : m_network.faces()) dx.push_back(s[f.offset] / m_mdot_unit);
+    for (const SolidNode& sn : m_network.solids()) dx.push_back(s[sn.offset]);
+    return dx;
 }
 
 namespace {
@@ -58,8 +113,6 @@ struct GmresResult {
     Vec x;
     int iterations = 0;
     Eigen::MatrixXd hessenberg;
-    Eigen::MatrixXd basis;    //!< V_k (n x k)
-    Eigen::MatrixXd products; //!< A V_k (n x k)
 };
 
 GmresResult gmres(const std::function<Vec(const Vec&)>& apply, const Vec& b, int max_iter,
@@ -71,12 +124,11 @@ GmresResult gmres(const std::function<Vec(const Vec&)>& apply, const Vec& b, int
     GmresResult r;
     r.x = Vec::Zero(n);
     if (beta == 0.0) return r;
-    Eigen::MatrixXd V(n, m + 1), H = Eigen::MatrixXd::Zero(m + 1, m), AV(n, m);
+    Eigen::MatrixXd V(n, m + 1), H = Eigen::MatrixXd::Zero(m + 1, m);
     V.col(0) = b / beta;
     int k = 0;
     for (; k < m; ++k) {
         Vec w = apply(V.col(k));
-        AV.col(k) = w;
         for (int i = 0; i <= k; ++i) {
             H(i, k) = w.dot(V.col(i));
             w -= H(i, k) * V.col(i);
@@ -93,8 +145,6 @@ GmresResult gmres(const std::function<Vec(const Vec&)>& apply, const Vec& b, int
         if (res <= rel_tol * beta || H(k + 1, k) <= 1e-14 * beta) {
             r.x = V.leftCols(k + 1) * y;
             r.hessenberg = H.topLeftCorner(k + 1, k + 1);
-            r.basis = V.leftCols(k + 1);
-            r.products = AV.leftCols(k + 1);
             return r;
         }
     }
@@ -104,8 +154,6 @@ GmresResult gmres(const std::function<Vec(const Vec&)>& apply, const Vec& b, int
     const Vec y = Hs.colPivHouseholderQr().solve(rhs);
     r.x = V.leftCols(m) * y;
     r.hessenberg = H.topLeftCorner(m, m);
-    r.basis = V.leftCols(m);
-    r.products = AV.leftCols(m);
     return r;
 }
 
@@ -132,13 +180,18 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
     using Clock = std::chrono::steady_clock;
     const auto t0 = Clock::now();
     const Machine& machine = runner.machine();
-    const SlowSubspace slow(machine.network());
+    const ShootingVariables slow(machine.network(), machine.description().gas.charge_pressure,
+                                 machine.massFlowScale());
     SteadyOutcome out;
     out.state.assign(y0.begin(), y0.end());
     out.period_index = period_index;
     bool stop = false;
 
-    // One plain cycle of the base trajectory: recorded, tested, reported.
+    // One plain cycle of the base trajectory: recorded, tested, reported. During warm-up the
+    // distance to the steady state is extrapolated from the change per cycle; in the Newton
+    // phase it is the Newton correction, known only after the linear solve.
+    DistanceEstimate extrapolation;
+    bool newton_phase = false;
     auto plainCycle = [&]() {
         CycleSamples samples;
         CycleRecord record = runner.runCycle(&samples, options.samples_per_cycle);
@@ -147,6 +200,8 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
         row.cycle = static_cast<long>(out.history.size()) + 1;
         row.time = record.t_end;
         row.metrics = cycleMetrics(machine, record);
+        row.metrics.distance_estimate =
+            newton_phase ? HUGE_VAL : extrapolation.add(row.metrics.max_temperature_change);
         row.work = record.work;
         row.boundary_enthalpy = boundaryEnthalpy(machine, record.averages);
         row.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();
@@ -174,7 +229,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
         for (int w = 0; w < shooting.warmup_cycles; ++w)
             if (plainCycle()) return out;
         const int k = shooting.cycles_per_map;
-        Eigen::MatrixXd recycled_basis, recycled_products;
+        newton_phase = true;
         for (int it = 1; it <= shooting.max_newton; ++it) {
             const long n0 = runner.periodIndex();
             const std::vector<double> y_start = out.state;
@@ -187,50 +242,34 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             const Vec F = g - x;
             report.residual_norm.push_back(rms(F));
 
-            // Directional derivative of the k-period map from the same start state.
-            const double eps = shooting.perturbation_K * std::sqrt(double(x.size()));
+            // Directional derivative of the k-period map from the same start state, carried
+            // as a forward sensitivity along a re-integration of the base trajectory.
             auto apply = [&](const Vec& v) -> Vec {
-                std::vector<double> y = y_start;
-                slow.add(y, toStd(v), eps);
-                runner.start(n0, y);
+                runner.start(n0, y_start);
+                runner.session().startSensitivity(slow.liftDirection(y_start, toStd(v)));
                 for (int j = 0; j < k; ++j) runner.runCycle();
                 report.cycle_equivalents += k;
-                const Vec gv = toEigen(slow.extract(runner.session().state()));
-                return v - (gv - g) / eps;
+                const std::vector<double> s = runner.session().sensitivity();
+                const Vec Mv = toEigen(slow.extractDirection(runner.session().state(), s));
+                runner.session().stopSensitivity();
+                return v - Mv;
             };
-            // Recycle the last Newton step's Krylov basis: its stored products approximate
-            // the current operator (which changes slowly), so the least-squares solution in
-            // that subspace is a good first guess; one fresh product measures its true
-            // residual and GMRES corrects what is left.
-            Vec guess = Vec::Zero(x.size());
-            Vec rhs = F;
-            if (recycled_basis.cols() > 0) {
-                const Vec y = recycled_products.colPivHouseholderQr().solve(F);
-                guess = recycled_basis * y;
-                rhs = F - apply(guess);
-            }
-            const double tolerance = shooting.krylov_tolerance * F.norm() / std::max(rhs.norm(), 1e-300);
-            GmresResult sol = gmres(apply, rhs, shooting.max_krylov, std::min(tolerance, 1.0));
-            sol.x += guess;
+            GmresResult sol = gmres(apply, F, shooting.max_krylov, shooting.krylov_tolerance);
             report.krylov_iterations.push_back(sol.iterations);
             report.floquet.push_back({it, multipliersOf(sol.hessenberg, k, 6)});
             report.newton_iterations = it;
-            if (sol.basis.cols() > 0) {
-                if (recycled_basis.cols() > 0 && recycled_basis.cols() + sol.basis.cols() <= x.size()) {
-                    Eigen::MatrixXd B(x.size(), recycled_basis.cols() + sol.basis.cols());
-                    Eigen::MatrixXd P(x.size(), B.cols());
-                    B << recycled_basis, sol.basis;
-                    P << recycled_products, sol.products;
-                    recycled_basis = B.rightCols(std::min<long>(B.cols(), shooting.max_krylov));
-                    recycled_products = P.rightCols(recycled_basis.cols());
-                } else {
-                    recycled_basis = sol.basis;
-                    recycled_products = sol.products;
-                }
-            }
-
             Vec dx = sol.x;
             const double largest = dx.cwiseAbs().maxCoeff();
+            // The Newton correction estimates how far the base cycles are from the fixed
+            // point: with it below tolerance the last base cycle is the answer.
+            out.metrics.distance_estimate = largest;
+            out.history.back().metrics.distance_estimate = largest;
+            out.converged = steadyStateReached(out.metrics, options,
+                                               static_cast<long>(out.history.size()));
+            if (out.converged) {
+                if (on_cycle && !on_cycle(out)) stop = true;
+                return out;
+            }
             if (largest > shooting.max_step_K) dx *= shooting.max_step_K / largest;
             // New start: the end of the base cycles, its slow part moved to x + dx.
             std::vector<double> y_next = y_end;
@@ -241,6 +280,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             if (stop) return out;
         }
         // Newton budget spent: finish with plain cycles up to the cycle limit.
+        newton_phase = false;
         while (static_cast<long>(out.history.size()) < options.max_cycles)
             if (plainCycle()) return out;
     } catch (const std::exception& e) {

@@ -5,15 +5,20 @@
 //! White, Proc. DAC 1995; the reduced-dimension variant of Andersen, Thomsen & Carlsen,
 //! Simul. Model. Pract. Theory 15, 2007). See numerics reference §2.2.
 //!
-//! Slow variables x (all in kelvin): every solid node's temperature and every gas cell's
-//! temperature T = E/(m c_v), moved at the cell's own pressure (SlowSubspace::add). Pressure
-//! and mass flows are left to the integration: they relax within a few cycles, and the
-//! total charge is held fixed (the map has a unit multiplier along the charge, which would
-//! make the Newton matrix singular). With G the slow part of the state after k periods,
+//! Unknowns x: the whole state in scaled coordinates (ShootingVariables): the slow modes
+//! (matrix, walls, the pulse tube's gas) need Newton, the fast ones would relax by
+//! themselves, but leaving them out of the update makes every Newton step kick them and
+//! their transient then floors the residual. The total charge is held fixed (the map has a
+//! unit multiplier along it, which would make the Newton matrix singular). With G the state
+//! after k periods,
 //!
-//!   solve  (I - M) dx = G(x) - x   by GMRES,   M v = [G(x + eps v) - G(x)] / eps,
+//!   solve  (I - M) dx = G(x) - x   by GMRES,   M v = dG/dx v,
 //!
-//! each product costing k periods from the same start state. The step is clipped to
+//! each product costing k periods from the same start state carrying one CVODES forward
+//! sensitivity: the exact derivative of the discrete map actually computed, on the base
+//! trajectory's own steps. (A finite difference of two adaptive integrations differs by
+//! their step sequences; near the solution that noise swamps the slow modes, whose
+//! eigenvalues of I - M are about k T/tau ~ 1e-3, and Newton stalls.) The step is clipped to
 //! max_step_K. The eigenvalues of the Arnoldi Hessenberg matrix approximate those of I - M,
 //! which gives the dominant Floquet multipliers mu = (1 - lambda)^(1/k) (the slowest modes).
 //! Convergence is judged on a plain cycle with the same test as plain integration
@@ -28,12 +33,11 @@
 namespace coldtip {
 
 struct ShootingOptions {
-    int cycles_per_map = 2;     //!< k: periods per evaluation of the map
+    int cycles_per_map = 1;     //!< k: periods per evaluation of the map
     int warmup_cycles = 10;     //!< plain cycles before the first Newton step
     int max_newton = 15;        //!< outer iterations
-    int max_krylov = 40;        //!< GMRES iterations per Newton step (no restart)
-    double krylov_tolerance = 0.1; //!< relative GMRES residual (inexact Newton)
-    double perturbation_K = 0.08;   //!< RMS finite-difference step per slow variable [K]
+    int max_krylov = 120;       //!< GMRES iterations per Newton step (no restart)
+    double krylov_tolerance = 1e-3; //!< relative GMRES residual
     double max_step_K = 30.0;       //!< largest temperature change of one Newton step [K]
 };
 
@@ -51,19 +55,27 @@ struct ShootingReport {
     std::vector<FloquetEstimate> floquet;
 };
 
-//! Scaled slow variables of a network's state (kelvin).
-class SlowSubspace {
+//! The shooting unknowns: every state in scaled coordinates of about one kelvin per unit,
+//! (p_i, T_i) per gas cell in place of (m_i, E_i), mdot per face, T per solid node; with the
+//! charge restored after every change, so the total mass never moves.
+class ShootingVariables {
 public:
-    explicit SlowSubspace(const Network& network);
+    //! Pressure unit p_charge/300 and mass-flow unit mdot_scale/300 per "kelvin".
+    ShootingVariables(const Network& network, double charge_pressure, double mass_flow_scale);
     int size() const { return m_n; }
     std::vector<double> extract(std::span<const double> y) const;
-    //! y += lift(dx): gas temperatures change by dx at their own pressure (the charge is
-    //! restored by one common factor), solid temperatures by dx.
-    void add(std::vector<double>& y, const std::vector<double>& dx, double scale = 1.0) const;
+    //! y += lift(dx), with the charge restored by one common factor on every m and E.
+    void add(std::vector<double>& y, const std::vector<double>& dx) const;
+    //! The state direction d lift(y, eps v)/d eps at eps = 0 (the linearised lift).
+    std::vector<double> liftDirection(std::span<const double> y, const std::vector<double>& v) const;
+    //! The scaled direction of a state direction s at y (the linearised extract).
+    std::vector<double> extractDirection(std::span<const double> y, std::span<const double> s) const;
 
 private:
+    static constexpr double kReferenceTemperature = 300.0;
     const Network& m_network;
     int m_n = 0;
+    double m_p_unit, m_mdot_unit;
 };
 
 //! Newton-Krylov shooting from (period_index, y0); the outcome's history holds the plain

@@ -354,6 +354,7 @@ SolverSpec readSolver(const MapReader& m)
     solver.steady.method = steady.choice("method");
     solver.steady.heat_residual = steady.quantity("heat_residual");
     solver.steady.energy_residual = steady.quantity("energy_residual");
+    solver.steady.temperature_tolerance = steady.quantity("temperature_tolerance");
     solver.steady.max_cycles = steady.integer("max_cycles");
     solver.steady.min_cycles = steady.integer("min_cycles");
     if (solver.steady.min_cycles > solver.steady.max_cycles)

@@ -312,14 +312,18 @@ std::vector<KeyTable> buildTables()
         {Table::Steady,
          "solver.steady",
          "Periodic-steady-state test and its limits.",
-         {oneOf("method", {"plain", "accelerated"}, "plain cycling or an accelerator")
-              .def("plain"),
+         {oneOf("method", {"plain", "accelerated"},
+                "accelerated: Newton-Krylov shooting; plain: cycle after cycle")
+              .def("accelerated"),
           quantity("heat_residual", D::Dimensionless, kFraction,
                    "max |cycle heat of a solid node| / cooling power")
               .def("1e-3"),
           quantity("energy_residual", D::Dimensionless, kFraction,
                    "|energy balance error| / PV power")
               .def("2e-3"),
+          quantity("temperature_tolerance", D::Temperature, kPositive,
+                   "estimated distance of any temperature from the steady state (in K)")
+              .def("0.05 K"),
           integer("max_cycles", Range::atLeast(1), "give up after this many cycles")
               .def("20000"),
           integer("min_cycles", Range::atLeast(1), "never stop before this many cycles")

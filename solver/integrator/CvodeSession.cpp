@@ -73,6 +73,7 @@ CvodeSession::~CvodeSession() = default;
 
 void CvodeSession::reinit(double t0, std::span<const double> y0)
 {
+    stopSensitivity();
     addCountersTo(m_previous);
     N_VConst(0.0, m_y.get());
     std::copy(y0.begin(), y0.end(), N_VGetArrayPointer(m_y.get()));
@@ -112,6 +113,8 @@ void CvodeSession::addCountersTo(IntegratorStats& s) const
     long v = 0;
     if (CVodeGetNumSteps(mem, &v) == CV_SUCCESS) s.steps += v;
     if (CVodeGetNumRhsEvals(mem, &v) == CV_SUCCESS) s.rhs_evaluations += v;
+    if (m_sens_initialised && CVodeGetNumRhsEvalsSens(mem, &v) == CV_SUCCESS)
+        s.rhs_evaluations += v;
     if (CVodeGetNumJacEvals(mem, &v) == CV_SUCCESS) s.jacobian_evaluations += v;
     if (CVodeGetNumLinSolvSetups(mem, &v) == CV_SUCCESS) s.linear_setups += v;
     if (CVodeGetNumErrTestFails(mem, &v) == CV_SUCCESS) s.error_test_failures += v;
@@ -129,6 +132,42 @@ IntegratorStats CvodeSession::stats() const
 void CvodeSession::setMaxSteps(long steps)
 {
     check(CVodeSetMaxNumSteps(m_cvode.get(), std::max(1L, steps)), "CVodeSetMaxNumSteps");
+}
+
+void CvodeSession::startSensitivity(std::span<const double> s0)
+{
+    void* mem = m_cvode.get();
+    if (!m_sens) m_sens.reset(N_VClone(m_y.get()));
+    N_VConst(0.0, m_sens.get());
+    std::copy(s0.begin(), s0.end(), N_VGetArrayPointer(m_sens.get()));
+    N_Vector vs[1] = {m_sens.get()};
+    if (!m_sens_initialised) {
+        check(CVodeSensInit(mem, 1, CV_STAGGERED, nullptr, vs), "CVodeSensInit");
+        check(CVodeSetSensParams(mem, &m_dummy_parameter, &m_dummy_scale, &m_dummy_list),
+              "CVodeSetSensParams");
+        check(CVodeSensEEtolerances(mem), "CVodeSensEEtolerances");
+        check(CVodeSetSensErrCon(mem, SUNFALSE), "CVodeSetSensErrCon");
+        check(CVodeSetSensDQMethod(mem, CV_FORWARD, 0.0), "CVodeSetSensDQMethod");
+        m_sens_initialised = true;
+    } else {
+        check(CVodeSensReInit(mem, CV_STAGGERED, vs), "CVodeSensReInit");
+    }
+    m_sens_active = true;
+}
+
+std::vector<double> CvodeSession::sensitivity()
+{
+    sunrealtype t = 0.0;
+    N_Vector vs[1] = {m_sens.get()};
+    check(CVodeGetSens(m_cvode.get(), &t, vs), "CVodeGetSens");
+    const double* d = N_VGetArrayPointer(m_sens.get());
+    return {d, d + m_n};
+}
+
+void CvodeSession::stopSensitivity()
+{
+    if (m_sens_active) check(CVodeSensToggleOff(m_cvode.get()), "CVodeSensToggleOff");
+    m_sens_active = false;
 }
 
 double CvodeSession::lastStep() const

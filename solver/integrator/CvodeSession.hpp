@@ -98,6 +98,17 @@ public:
     //! Steps CVODE may take within the next advance() calls (CV_TOO_MUCH_WORK beyond).
     void setMaxSteps(long steps);
 
+    //! Carry one forward sensitivity s = dy/dy0 along the next integration (call after
+    //! reinit), starting from direction s0 (physical states only). CVODES integrates it with
+    //! the staggered corrector on the same steps as the state and outside the error test, so
+    //! s is the exact derivative of the discrete map actually computed (numerics reference
+    //! §5.11); its right-hand side J s comes from a difference quotient of the network.
+    void startSensitivity(std::span<const double> s0);
+    //! The sensitivity at the last return time (physical states).
+    std::vector<double> sensitivity();
+    //! Stop carrying the sensitivity (plain integration again).
+    void stopSensitivity();
+
     const Network& network() const { return m_network; }
 
 private:
@@ -125,7 +136,7 @@ private:
     IntegratorOptions m_options;
     // Declaration order is destruction order reversed: the context dies last.
     std::unique_ptr<std::remove_pointer_t<SUNContext>, ContextDeleter> m_context;
-    std::unique_ptr<std::remove_pointer_t<N_Vector>, VectorDeleter> m_y;
+    std::unique_ptr<std::remove_pointer_t<N_Vector>, VectorDeleter> m_y, m_sens;
     std::unique_ptr<std::remove_pointer_t<SUNMatrix>, MatrixDeleter> m_matrix;
     std::unique_ptr<std::remove_pointer_t<SUNLinearSolver>, SolverDeleter> m_solver;
     std::unique_ptr<void, CvodeDeleter> m_cvode;
@@ -138,6 +149,13 @@ private:
     std::string m_last_message;
     double m_t = 0.0;
     IntegratorStats m_previous; //!< counters of earlier (re)initialisations
+    bool m_sens_initialised = false;
+    bool m_sens_active = false;
+    // The difference-quotient sensitivity right-hand side wants a parameter it can perturb;
+    // the network does not read it, so the quotient is the pure state direction J s.
+    double m_dummy_parameter = 1.0;
+    double m_dummy_scale = 1.0;
+    int m_dummy_list = 0;
 };
 
 } // namespace coldtip

@@ -172,7 +172,7 @@ TEST_CASE("absent optional sections take their defaults", "[input]")
                                  "");
     const CaseDescription c = parseCaseText(text, "defaults.yaml");
     CHECK(c.solver.relative_tolerance == Approx(1e-6));
-    CHECK(c.solver.steady.method == "plain");
+    CHECK(c.solver.steady.method == "accelerated");
     CHECK(c.solver.steady.max_cycles == 20000);
     CHECK(c.solver.steady.min_cycles == 5);
     CHECK(c.output.samples_per_cycle == 96);
