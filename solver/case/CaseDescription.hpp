@@ -99,6 +99,9 @@ struct ComponentSpec {
     double diameter = 0.0;   //!< [m] inner (frontal) diameter
     double volume = 0.0;     //!< [m^3] volume
     int cells = 0;           //!< number of control volumes (the reader fills the default)
+    //! Weight beta of cosine spacing in the cell edges x_i = L[(1-beta) u + beta (1 - cos(pi u))/2],
+    //! u = i/cells: cells crowd towards both ends, where profiles are steepest.
+    double cell_clustering = 0.0;
     double roughness = 0.0;  //!< [m] duct, tube: absolute wall roughness
     FillSpec fill;           //!< heat exchanger, regenerator
     WallSpec wall;           //!< see WallSpec

@@ -1,5 +1,6 @@
 #include "solver/components/Component.hpp"
 
+#include <cmath>
 #include <fmt/format.h>
 
 #include "solver/components/Laws.hpp"
@@ -21,13 +22,20 @@ void Component::addPassageCells(AssemblyContext& ctx, int count, double length,
                                 double T_in, double T_out)
 {
     Network& net = ctx.network;
-    const double dx = length / count;
     const double flow_area = frontal_area * passage->porosity();
+    // Cell edges: uniform, or clustered towards both ends (where regenerator and pulse-tube
+    // profiles are steepest) by blending with cosine spacing, weight beta.
+    const double beta = m_spec.cell_clustering;
+    auto edge = [&](int i) {
+        const double u = double(i) / count;
+        return length * ((1.0 - beta) * u + beta * 0.5 * (1.0 - std::cos(M_PI * u)));
+    };
     for (int i = 0; i < count; ++i) {
+        const double dx = edge(i + 1) - edge(i);
         GasCell c;
         c.name = fmt::format("{}[{}]", name(), i);
         c.component = m_index;
-        c.x = ctx.x + (i + 0.5) * dx;
+        c.x = ctx.x + 0.5 * (edge(i) + edge(i + 1));
         c.length = dx;
         c.frontal_area = frontal_area;
         c.flow_area = flow_area;
@@ -43,7 +51,7 @@ void Component::addPassageCells(AssemblyContext& ctx, int count, double length,
             f.from = id - 1;
             f.to = id;
             f.component = m_index;
-            f.x = ctx.x + i * dx;
+            f.x = ctx.x + edge(i);
             m_internal_faces.push_back(net.addFace(f));
         }
         m_last_cell = id;

@@ -215,7 +215,8 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
         out.converged =
             steadyStateReached(row.metrics, options, static_cast<long>(out.history.size()));
         if (on_cycle && !on_cycle(out)) stop = true;
-        return out.converged || stop;
+        return out.converged || stop ||
+               static_cast<long>(out.history.size()) >= options.max_cycles;
     };
     auto fail = [&](const std::exception& e) {
         out.failed = true;

@@ -264,6 +264,7 @@ ComponentSpec readComponent(const Element& element, const ReadContext& context,
         break;
     case Kind::Regenerator:
         readPassage(m, c);
+        c.cell_clustering = m.quantity("cell_clustering");
         c.fill = readFill(m, row);
         if (m.has("housing")) {
             const MapReader housing = m.map("housing");
@@ -273,6 +274,7 @@ ComponentSpec readComponent(const Element& element, const ReadContext& context,
         break;
     case Kind::Tube:
         readPassage(m, c);
+        c.cell_clustering = m.quantity("cell_clustering");
         c.roughness = m.quantity("roughness");
         if (m.has("wall")) {
             const MapReader wall = m.map("wall");

@@ -102,6 +102,12 @@ Key cellsKey(std::string byDefault)
     return integer("cells", Range::atLeast(1), "number of control volumes")
         .def(byDefault);
 }
+Key clusteringKey()
+{
+    return quantity("cell_clustering", D::Dimensionless, Range::closedOpen(0.0, 1.0),
+                    "cells crowd towards both ends (0 = uniform, cosine spacing as it -> 1)")
+        .def("0.9");
+}
 Key roughnessKey()
 {
     return quantity("roughness", D::Length, Range::atLeast(0.0),
@@ -232,7 +238,7 @@ std::vector<KeyTable> buildTables()
         {Table::Regenerator,
          "components[i] with kind: regenerator",
          "A porous matrix that stores heat from one half-cycle to the next.",
-         {lengthKey(), diameterKey(), cellsKey("20"),
+         {lengthKey(), diameterKey(), cellsKey("50"), clusteringKey(),
           map("fill", {Table::Fill, Table::FillScreen, Table::FillSpheres},
               "the matrix: screen or spheres, with its material")
               .req(),
@@ -244,7 +250,7 @@ std::vector<KeyTable> buildTables()
         {Table::Tube,
          "components[i] with kind: tube",
          "An open tube with a temperature gradient along it (the pulse tube).",
-         {lengthKey(), diameterKey(), cellsKey("20"), roughnessKey(),
+         {lengthKey(), diameterKey(), cellsKey("50"), clusteringKey(), roughnessKey(),
           map("wall", {Table::TubeWall}, "conducting wall; absent: adiabatic")}},
         {Table::TubeWall,
          "wall of a tube",

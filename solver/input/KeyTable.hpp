@@ -37,6 +37,7 @@ struct Range {
     static Range atLeast(double lo) { return {lo, Range{}.hi, true, true}; }
     static Range open(double lo, double hi) { return {lo, hi, false, false}; }
     static Range closed(double lo, double hi) { return {lo, hi, true, true}; }
+    static Range closedOpen(double lo, double hi) { return {lo, hi, true, false}; }
     //! (lo, hi]
     static Range aboveUpTo(double lo, double hi) { return {lo, hi, false, true}; }
 };

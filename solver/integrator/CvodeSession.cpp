@@ -1,5 +1,7 @@
 #include "solver/integrator/CvodeSession.hpp"
 
+#include "solver/integrator/FastNorm.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <fmt/format.h>
@@ -36,6 +38,7 @@ CvodeSession::CvodeSession(const Network& network, const IntegratorOptions& opti
     m_context.reset(ctx);
     m_y.reset(N_VNew_Serial(n, ctx));
     if (!m_y) throw IntegratorError("N_VNew_Serial failed", -1, t0, {});
+    installFastNorm(m_y.get());
     N_VConst(0.0, m_y.get());
     std::copy(y0.begin(), y0.end(), N_VGetArrayPointer(m_y.get()));
 

@@ -118,6 +118,11 @@ template <int N> Dual<N> exp(const Dual<N>& a)
     return chain(models::Slope{e, e}, a);
 }
 template <int N> Dual<N> log(const Dual<N>& a) { return chain(models::Slope{std::log(a.v), 1.0 / a.v}, a); }
+template <int N> Dual<N> tanh(const Dual<N>& a)
+{
+    const double t = std::tanh(a.v);
+    return chain(models::Slope{t, 1.0 - t * t}, a);
+}
 template <int N> Dual<N> pow(const Dual<N>& a, double p)
 {
     const double r = std::pow(a.v, p);

@@ -73,11 +73,13 @@ MomentumFace::Result<S> MomentumFace::compute(const GasState<S>* before, const G
 
     using RC = ReconstructionCell<S>;
     const RC cell_before{before ? &before->T : nullptr, before ? m_before_cell->x : 0.0,
-                         before && m_before_cell->length <= 0.0};
-    const RC cell_a{&a.T, m_a->x, m_a->length <= 0.0};
-    const RC cell_b{&b.T, m_b->x, m_b->length <= 0.0};
+                         before && m_before_cell->length <= 0.0,
+                         before ? m_before_cell->component : -1};
+    const RC cell_a{&a.T, m_a->x, m_a->length <= 0.0, m_a->component};
+    const RC cell_b{&b.T, m_b->x, m_b->length <= 0.0, m_b->component};
     const RC cell_after{after ? &after->T : nullptr, after ? m_after_cell->x : 0.0,
-                        after && m_after_cell->length <= 0.0};
+                        after && m_after_cell->length <= 0.0,
+                        after ? m_after_cell->component : -1};
     const S T_left = reconstructFaceTemperature(cell_before, cell_a, cell_b, m_face.x);
     const S T_right = reconstructFaceTemperature(cell_after, cell_b, cell_a, m_face.x);
 

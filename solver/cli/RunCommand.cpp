@@ -1,0 +1,118 @@
+#include <chrono>
+#include <filesystem>
+#include <fmt/format.h>
+#include <iostream>
+
+#include "solver/cli/Commands.hpp"
+#include "solver/cli/Progress.hpp"
+#include "solver/components/Machine.hpp"
+#include "solver/cycle/SteadyStateSolver.hpp"
+#include "solver/input/CaseReader.hpp"
+#include "solver/output/ResultFile.hpp"
+
+namespace coldtip::cli {
+
+namespace {
+
+std::string defaultResultPath(const std::string& case_path)
+{
+    return std::filesystem::path(case_path).stem().string() + ".h5";
+}
+
+struct RunOptions {
+    std::string case_path;
+    std::string output;
+    long max_cycles = 0;
+    bool resume = false;
+    bool quiet = false;
+    bool json = false;
+};
+
+int runCase(const RunOptions& opt, const RunInfo& info)
+{
+    const CaseDescription d = input::readCaseFile(opt.case_path);
+    Machine machine(d);
+    const std::string out_path = opt.output.empty() ? defaultResultPath(opt.case_path) : opt.output;
+    long period = 0;
+    std::vector<double> y0 = machine.initialState();
+    if (opt.resume && std::filesystem::exists(out_path)) {
+        SavedState saved = readSavedState(out_path, machine);
+        period = saved.period_index;
+        y0 = std::move(saved.state);
+    }
+
+    Progress progress(opt.quiet);
+    CycleRunner runner(machine, CycleRunner::optionsFor(machine));
+    const SteadyOptions o = steadyOptionsFor(d, opt.max_cycles);
+    watchInterrupts();
+    auto last_save = std::chrono::steady_clock::now();
+    auto save = [&](const SteadyOutcome& s, const std::string& status) {
+        RunSummary summary = summarize(machine, s, status, s.wall_time_s);
+        summary.result_file = out_path;
+        writeRunResult(out_path, machine, s, summary, info);
+        return summary;
+    };
+    auto on_cycle = [&](const SteadyOutcome& s) {
+            const CycleMetrics& m = s.metrics;
+            progress.cycle(s.history.back().cycle, m.cold_temperature, m.cooling_power,
+                           m.heat_residual, o.heat_residual, s.wall_time_s);
+            // A checkpoint every 30 s: a killed run leaves the last complete cycle on disk.
+            const auto now = std::chrono::steady_clock::now();
+            if (now - last_save > std::chrono::seconds(30)) {
+                save(s, "running");
+                last_save = now;
+            }
+            return !interrupted();
+        };
+    ShootingReport report;
+    SteadyOutcome out =
+        solveSteadyState(runner, period, y0, o, d.solver.steady.method, report, on_cycle);
+    progress.finish();
+    if (d.solver.steady.method == "accelerated")
+        for (int i = 0; i < report.newton_iterations; ++i) {
+            std::string mu;
+            for (auto m : report.floquet[i].multipliers) mu += fmt::format(" {:.5f}", std::abs(m));
+            progress.note(fmt::format("newton {}: residual {:.3e} K, {} krylov, |mu|{}", i + 1,
+                                      report.residual_norm[i], report.krylov_iterations[i], mu));
+        }
+
+    std::string status = out.converged ? "converged" : "max-cycles";
+    if (interrupted()) status = "interrupted";
+    if (out.failed) status = "failed";
+    const RunSummary summary = save(out, status);
+    if (opt.json) std::cout << toJson(summary).dump(2) << std::endl;
+    if (out.failed) {
+        fmt::print(stderr, "error: solver failure after {} complete cycles: {}\n"
+                           "the last complete cycle is in {}\n",
+                   out.history.size(), out.failure, out_path);
+        return kExitSolverFailure;
+    }
+    const CycleMetrics& m = out.metrics;
+    progress.note(fmt::format(
+        "{}: {} after {} cycles ({:.1f} s): cooling {:.3f} W at {:.2f} K, PV {:.3f} W, "
+        "COP {:.4f}, {:.1f} % of Carnot, energy balance {:+.2e}, residual {:.2e}; wrote {}",
+        d.name, status, out.history.size(), out.wall_time_s, m.cooling_power,
+        m.cold_temperature, m.pv_power, m.cop, 100.0 * m.carnot_fraction,
+        m.energy_balance_error, m.heat_residual, out_path));
+    if (interrupted()) return kExitInterrupted;
+    return kExitSuccess;
+}
+
+} // namespace
+
+void addRunCommand(CLI::App& app, Action& action, const CommandContext& context)
+{
+    auto opt = std::make_shared<RunOptions>();
+    auto* run = app.add_subcommand("run", "integrate a case to its periodic steady state");
+    run->add_option("CASE", opt->case_path, "case file (YAML)")->required();
+    run->add_option("-o,--output", opt->output, "result file (default: CASE name + .h5)");
+    run->add_option("--max-cycles", opt->max_cycles, "stop after this many cycles");
+    run->add_flag("--resume", opt->resume, "continue from the state saved in the result file");
+    run->add_flag("--quiet", opt->quiet, "no progress on stderr");
+    run->add_flag("--json", opt->json, "print the summary as JSON on stdout");
+    run->callback([&action, opt, context] {
+        action = [opt, context] { return runCase(*opt, RunInfo{context.command_line}); };
+    });
+}
+
+} // namespace coldtip::cli

@@ -1,0 +1,27 @@
+#include "solver/cycle/SteadyStateSolver.hpp"
+
+namespace coldtip {
+
+SteadyOptions steadyOptionsFor(const CaseDescription& d, long max_cycles)
+{
+    SteadyOptions o;
+    o.max_cycles = max_cycles > 0 ? max_cycles : d.solver.steady.max_cycles;
+    o.min_cycles = d.solver.steady.min_cycles;
+    o.heat_residual = d.solver.steady.heat_residual;
+    o.energy_residual = d.solver.steady.energy_residual;
+    o.temperature_tolerance = d.solver.steady.temperature_tolerance;
+    o.samples_per_cycle = d.output.samples_per_cycle;
+    return o;
+}
+
+SteadyOutcome solveSteadyState(CycleRunner& runner, long period_index,
+                               std::span<const double> y0, const SteadyOptions& options,
+                               const std::string& method, ShootingReport& report,
+                               const std::function<bool(const SteadyOutcome&)>& on_cycle)
+{
+    if (method == "plain") return integrateToSteadyState(runner, period_index, y0, options, on_cycle);
+    return shootToSteadyState(runner, period_index, y0, options, ShootingOptions{}, report,
+                              on_cycle);
+}
+
+} // namespace coldtip
