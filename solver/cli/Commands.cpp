@@ -36,6 +36,8 @@ int main(int argc, char** argv)
     Action action;
     addRunCommand(app, action, context);
     addCheckCommand(app, action, context);
+    addPlotCommand(app, action, context);
+    addKeysCommand(app, action, context);
     try {
         app.parse(argc, argv);
     } catch (const CLI::ParseError& e) {

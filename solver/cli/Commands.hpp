@@ -26,6 +26,8 @@ struct CommandContext {
 using Action = std::function<int()>;
 void addRunCommand(CLI::App& app, Action& action, const CommandContext& context);
 void addCheckCommand(CLI::App& app, Action& action, const CommandContext& context);
+void addPlotCommand(CLI::App& app, Action& action, const CommandContext& context);
+void addKeysCommand(CLI::App& app, Action& action, const CommandContext& context);
 
 //! SIGINT/SIGTERM set a flag that long commands poll between cycles.
 void watchInterrupts();

@@ -26,6 +26,7 @@ struct RunOptions {
     bool resume = false;
     bool quiet = false;
     bool json = false;
+    bool verbose = false;
 };
 
 int runCase(const RunOptions& opt, const RunInfo& info)
@@ -64,16 +65,17 @@ int runCase(const RunOptions& opt, const RunInfo& info)
             }
             return !interrupted();
         };
-    ShootingReport report;
-    SteadyOutcome out =
-        solveSteadyState(runner, period, y0, o, d.solver.steady.method, report, on_cycle);
+    SteadyOutcome out = solveSteadyState(runner, period, y0, o, d.solver.steady.method, on_cycle);
+    const SolverDiagnostics& report = out.diagnostics;
     progress.finish();
-    if (d.solver.steady.method == "accelerated")
+    if (opt.verbose)
         for (int i = 0; i < report.newton_iterations; ++i) {
             std::string mu;
-            for (auto m : report.floquet[i].multipliers) mu += fmt::format(" {:.5f}", std::abs(m));
-            progress.note(fmt::format("newton {}: residual {:.3e} K, {} krylov, |mu|{}", i + 1,
-                                      report.residual_norm[i], report.krylov_iterations[i], mu));
+            for (auto m : report.floquet[i]) mu += fmt::format(" {:.5f}", std::abs(m));
+            progress.note(fmt::format("newton step {}: residual {:.3e} K (RMS), {} GMRES "
+                                      "iterations, dominant Floquet multipliers |mu|:{}",
+                                      i + 1, report.newton_residual[i],
+                                      report.krylov_iterations[i], mu));
         }
 
     std::string status = out.converged ? "converged" : "max-cycles";
@@ -110,6 +112,8 @@ void addRunCommand(CLI::App& app, Action& action, const CommandContext& context)
     run->add_flag("--resume", opt->resume, "continue from the state saved in the result file");
     run->add_flag("--quiet", opt->quiet, "no progress on stderr");
     run->add_flag("--json", opt->json, "print the summary as JSON on stdout");
+    run->add_flag("--verbose", opt->verbose,
+                  "print every Newton step with the dominant Floquet multipliers");
     run->callback([&action, opt, context] {
         action = [opt, context] { return runCase(*opt, RunInfo{context.command_line}); };
     });

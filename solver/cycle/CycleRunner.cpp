@@ -66,14 +66,7 @@ CycleRecord CycleRunner::runCycle(CycleSamples* samples, int n_samples)
     m_quad_at_start = q;
     const auto y = m_session.state();
     r.end_state.assign(y.begin(), y.end());
-    const IntegratorStats after = m_session.stats();
-    r.work.steps = after.steps - before.steps;
-    r.work.rhs_evaluations = after.rhs_evaluations - before.rhs_evaluations;
-    r.work.jacobian_evaluations = after.jacobian_evaluations - before.jacobian_evaluations;
-    r.work.linear_setups = after.linear_setups - before.linear_setups;
-    r.work.error_test_failures = after.error_test_failures - before.error_test_failures;
-    r.work.nonlinear_iterations = after.nonlinear_iterations - before.nonlinear_iterations;
-    r.work.nonlinear_failures = after.nonlinear_failures - before.nonlinear_failures;
+    r.work = m_session.stats() - before;
     ++m_period;
     r.cycle = ++m_cycles;
     return r;

@@ -15,6 +15,7 @@
 //! ratio mu of the last cycles, d_n mu / (1 - mu) (Aitken's delta-squared idea; the
 //! dominant-eigenvalue method of Crowe & Nishio, AIChE J. 1975).
 
+#include <complex>
 #include <functional>
 #include <string>
 #include <vector>
@@ -54,6 +55,17 @@ struct HistoryRow {
     double wall_time_s = 0.0;
 };
 
+//! How the steady state was reached: effort, and the accelerator's own diagnostics.
+struct SolverDiagnostics {
+    long cycle_equivalents = 0;  //!< every period integrated, sensitivity periods included
+    IntegratorStats work;        //!< integrator effort over the whole solve
+    int newton_iterations = 0;
+    std::vector<double> newton_residual;   //!< RMS of G(x) - x per Newton step [K]
+    std::vector<int> krylov_iterations;    //!< GMRES iterations per Newton step
+    //! Dominant Floquet multipliers per Newton step (largest modulus first).
+    std::vector<std::vector<std::complex<double>>> floquet;
+};
+
 struct SteadyOutcome {
     bool converged = false;
     bool failed = false;
@@ -65,6 +77,7 @@ struct SteadyOutcome {
     std::vector<double> state;        //!< state at the end of the last complete cycle
     long period_index = 0;            //!< period index at that state
     double wall_time_s = 0.0;
+    SolverDiagnostics diagnostics;
 };
 
 //! Cycle-mean enthalpy flow at every component boundary, in the order of

@@ -174,7 +174,7 @@ std::vector<std::complex<double>> multipliersOf(const Eigen::MatrixXd& H, int k,
 
 SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
                                  std::span<const double> y0, const SteadyOptions& options,
-                                 const ShootingOptions& shooting, ShootingReport& report,
+                                 const ShootingOptions& shooting,
                                  const std::function<bool(const SteadyOutcome&)>& on_cycle)
 {
     using Clock = std::chrono::steady_clock;
@@ -185,6 +185,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
     SteadyOutcome out;
     out.state.assign(y0.begin(), y0.end());
     out.period_index = period_index;
+    SolverDiagnostics& report = out.diagnostics;
     bool stop = false;
 
     // One plain cycle of the base trajectory: recorded, tested, reported. During warm-up the
@@ -241,7 +242,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             const long n_end = runner.periodIndex();
             const Vec g = toEigen(slow.extract(y_end));
             const Vec F = g - x;
-            report.residual_norm.push_back(rms(F));
+            report.newton_residual.push_back(rms(F));
 
             // Directional derivative of the k-period map from the same start state, carried
             // as a forward sensitivity along a re-integration of the base trajectory.
@@ -257,7 +258,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             };
             GmresResult sol = gmres(apply, F, shooting.max_krylov, shooting.krylov_tolerance);
             report.krylov_iterations.push_back(sol.iterations);
-            report.floquet.push_back({it, multipliersOf(sol.hessenberg, k, 6)});
+            report.floquet.push_back(multipliersOf(sol.hessenberg, k, 6));
             report.newton_iterations = it;
             Vec dx = sol.x;
             const double largest = dx.cwiseAbs().maxCoeff();

@@ -41,20 +41,6 @@ struct ShootingOptions {
     double max_step_K = 30.0;       //!< largest temperature change of one Newton step [K]
 };
 
-//! Dominant Floquet multipliers estimated along the way (complex, largest modulus first).
-struct FloquetEstimate {
-    int newton_iteration = 0;
-    std::vector<std::complex<double>> multipliers;
-};
-
-struct ShootingReport {
-    int newton_iterations = 0;
-    long cycle_equivalents = 0;       //!< every period integrated, products included
-    std::vector<double> residual_norm; //!< |G(x) - x| (RMS, K) per Newton iteration
-    std::vector<int> krylov_iterations;
-    std::vector<FloquetEstimate> floquet;
-};
-
 //! The shooting unknowns: every state in scaled coordinates of about one kelvin per unit,
 //! (p_i, T_i) per gas cell in place of (m_i, E_i), mdot per face, T per solid node; with the
 //! charge restored after every change, so the total mass never moves.
@@ -79,11 +65,11 @@ private:
 };
 
 //! Newton-Krylov shooting from (period_index, y0); the outcome's history holds the plain
-//! cycles of the base trajectory, `report` the solver's own diagnostics. `on_cycle` as for
-//! integrateToSteadyState (returning false interrupts).
+//! cycles of the base trajectory, its diagnostics the Newton steps and the Floquet
+//! estimates. `on_cycle` as for integrateToSteadyState (returning false interrupts).
 SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
                                  std::span<const double> y0, const SteadyOptions& options,
-                                 const ShootingOptions& shooting, ShootingReport& report,
+                                 const ShootingOptions& shooting,
                                  const std::function<bool(const SteadyOutcome&)>& on_cycle);
 
 } // namespace coldtip

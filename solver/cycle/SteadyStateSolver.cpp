@@ -16,12 +16,17 @@ SteadyOptions steadyOptionsFor(const CaseDescription& d, long max_cycles)
 
 SteadyOutcome solveSteadyState(CycleRunner& runner, long period_index,
                                std::span<const double> y0, const SteadyOptions& options,
-                               const std::string& method, ShootingReport& report,
+                               const std::string& method,
                                const std::function<bool(const SteadyOutcome&)>& on_cycle)
 {
-    if (method == "plain") return integrateToSteadyState(runner, period_index, y0, options, on_cycle);
-    return shootToSteadyState(runner, period_index, y0, options, ShootingOptions{}, report,
-                              on_cycle);
+    const IntegratorStats before = runner.session().stats();
+    SteadyOutcome out =
+        method == "plain"
+            ? integrateToSteadyState(runner, period_index, y0, options, on_cycle)
+            : shootToSteadyState(runner, period_index, y0, options, ShootingOptions{}, on_cycle);
+    if (method == "plain") out.diagnostics.cycle_equivalents = static_cast<long>(out.history.size());
+    out.diagnostics.work = runner.session().stats() - before;
+    return out;
 }
 
 } // namespace coldtip

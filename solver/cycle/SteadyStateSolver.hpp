@@ -16,10 +16,10 @@ namespace coldtip {
 SteadyOptions steadyOptionsFor(const CaseDescription& d, long max_cycles = 0);
 
 //! Integrate to the periodic steady state from (period_index, y0) with `method`
-//! ("accelerated" or "plain"); `report` receives the accelerator's diagnostics.
+//! ("accelerated" or "plain"); the outcome's diagnostics hold the effort.
 SteadyOutcome solveSteadyState(CycleRunner& runner, long period_index,
                                std::span<const double> y0, const SteadyOptions& options,
-                               const std::string& method, ShootingReport& report,
+                               const std::string& method,
                                const std::function<bool(const SteadyOutcome&)>& on_cycle = {});
 
 } // namespace coldtip

@@ -72,6 +72,18 @@ struct IntegratorStats {
     long nonlinear_failures = 0;
 };
 
+//! Effort between two snapshots of the counters.
+inline IntegratorStats operator-(const IntegratorStats& a, const IntegratorStats& b)
+{
+    return {a.steps - b.steps,
+            a.rhs_evaluations - b.rhs_evaluations,
+            a.jacobian_evaluations - b.jacobian_evaluations,
+            a.linear_setups - b.linear_setups,
+            a.error_test_failures - b.error_test_failures,
+            a.nonlinear_iterations - b.nonlinear_iterations,
+            a.nonlinear_failures - b.nonlinear_failures};
+}
+
 class CvodeSession {
 public:
     CvodeSession(const Network& network, const IntegratorOptions& options, double t0,

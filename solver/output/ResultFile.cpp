@@ -272,6 +272,30 @@ void writeRunResult(const std::string& path, const Machine& machine, const Stead
     w.attribute("/solver", "jacobian_nonzeros", machine.network().pattern().nnz());
     w.attribute("/solver", "quadratures", static_cast<long>(machine.network().nQuadratures()));
 
+    const SolverDiagnostics& dg = out.diagnostics;
+    w.attribute("/solver", "cycle_equivalents", dg.cycle_equivalents);
+    w.attribute("/solver", "steps", dg.work.steps);
+    w.attribute("/solver", "rhs_evaluations", dg.work.rhs_evaluations);
+    w.attribute("/solver", "jacobian_evaluations", dg.work.jacobian_evaluations);
+    w.attribute("/solver", "error_test_failures", dg.work.error_test_failures);
+    w.attribute("/solver", "nonlinear_failures", dg.work.nonlinear_failures);
+    w.attribute("/solver", "method", d.solver.steady.method);
+    if (dg.newton_iterations > 0) {
+        // Newton steps and the dominant Floquet multipliers (modulus, argument) per step.
+        std::vector<double> krylov(dg.krylov_iterations.begin(), dg.krylov_iterations.end());
+        w.write("/solver/newton/residual", dg.newton_residual, "K");
+        w.write("/solver/newton/krylov_iterations", krylov, "1");
+        std::size_t width = 0;
+        for (const auto& f : dg.floquet) width = std::max(width, f.size());
+        std::vector<double> modulus(dg.floquet.size() * width, 0.0), argument(modulus.size(), 0.0);
+        for (std::size_t i = 0; i < dg.floquet.size(); ++i)
+            for (std::size_t j = 0; j < dg.floquet[i].size(); ++j) {
+                modulus[i * width + j] = std::abs(dg.floquet[i][j]);
+                argument[i * width + j] = std::arg(dg.floquet[i][j]) * 180.0 / M_PI;
+            }
+        w.write("/solver/newton/floquet_modulus", modulus, dg.floquet.size(), width, "1");
+        w.write("/solver/newton/floquet_argument", argument, dg.floquet.size(), width, "deg");
+    }
     std::vector<std::string> names;
     for (int k = 0; k < machine.network().size(); ++k) names.push_back(machine.network().stateName(k));
     w.write("/state/y", out.state, "SI (see name)");

@@ -2,8 +2,19 @@
 
 #include <algorithm>
 #include <cmath>
+#include <fstream>
 
 namespace coldtip {
+
+double peakResidentMegabytes()
+{
+    // VmHWM: the peak resident set size of this process (proc(5)).
+    std::ifstream status("/proc/self/status");
+    std::string line;
+    while (std::getline(status, line))
+        if (line.rfind("VmHWM:", 0) == 0) return std::stod(line.substr(6)) / 1024.0;
+    return 0.0;
+}
 
 RunSummary summarize(const Machine& machine, const SteadyOutcome& out, const std::string& status,
                      double wall_time_s)
@@ -24,14 +35,13 @@ RunSummary summarize(const Machine& machine, const SteadyOutcome& out, const std
         p_max = j == 0 ? p : std::max(p_max, p);
         p_min = j == 0 ? p : std::min(p_min, p);
     }
-    long steps = 0, rhs = 0, jac = 0;
-    for (const HistoryRow& r : out.history) {
-        steps += r.work.steps;
-        rhs += r.work.rhs_evaluations;
-        jac += r.work.jacobian_evaluations;
-    }
+    // Effort per period integrated: for the accelerated solver the periods carrying a
+    // sensitivity count as cycles too (cycle equivalents).
+    const SolverDiagnostics& dg = out.diagnostics;
     const double cycles = static_cast<double>(out.history.size());
-    const double per = cycles > 0 ? 1.0 / cycles : 0.0;
+    const double equivalents =
+        dg.cycle_equivalents > 0 ? static_cast<double>(dg.cycle_equivalents) : cycles;
+    const double per = equivalents > 0 ? 1.0 / equivalents : 0.0;
     s.values = {
         {"cooling_power_W", m.cooling_power},
         {"gross_cooling_power_W", m.gross_cooling},
@@ -47,16 +57,20 @@ RunSummary summarize(const Machine& machine, const SteadyOutcome& out, const std
         {"frequency_Hz", machine.frequency()},
         {"charge_pressure_Pa", machine.description().gas.charge_pressure},
         {"cycles", cycles},
+        {"cycle_equivalents", equivalents},
+        {"newton_iterations", static_cast<double>(dg.newton_iterations)},
         {"converged", out.converged ? 1.0 : 0.0},
         {"energy_balance_error", m.energy_balance_error},
         {"steady_residual", m.heat_residual},
         {"max_temperature_change_K", m.max_temperature_change},
         {"mass_change", m.mass_change},
         {"wall_time_s", wall_time_s},
-        {"cycles_per_s", wall_time_s > 0.0 ? cycles / wall_time_s : 0.0},
-        {"steps_per_cycle", steps * per},
-        {"rhs_per_cycle", rhs * per},
-        {"jac_per_cycle", jac * per},
+        {"cycles_per_s", wall_time_s > 0.0 ? equivalents / wall_time_s : 0.0},
+        {"steps_per_cycle", dg.work.steps * per},
+        {"rhs_per_cycle", dg.work.rhs_evaluations * per},
+        {"jac_per_cycle", dg.work.jacobian_evaluations * per},
+        {"peak_rss_MB", peakResidentMegabytes()},
+        {"distance_estimate_K", m.distance_estimate},
     };
     return s;
 }
@@ -71,7 +85,8 @@ nlohmann::json toJson(const RunSummary& s)
     for (const SummaryValue& v : s.values) {
         if (v.key == "converged")
             j[v.key] = v.value != 0.0;
-        else if (v.key == "cycles")
+        else if (v.key == "cycles" || v.key == "cycle_equivalents" ||
+                 v.key == "newton_iterations")
             j[v.key] = static_cast<long>(v.value);
         else
             j[v.key] = std::isfinite(v.value) ? nlohmann::json(v.value) : nlohmann::json(nullptr);

@@ -25,6 +25,9 @@ struct RunSummary {
     std::vector<SummaryValue> values; //!< numeric keys, units in their names
 };
 
+//! Peak resident memory of this process [MB].
+double peakResidentMegabytes();
+
 //! Summary of a steady-state run of `machine`.
 RunSummary summarize(const Machine& machine, const SteadyOutcome& outcome,
                      const std::string& status, double wall_time_s);

@@ -18,6 +18,9 @@ MomentumFace::MomentumFace(const FlowFace& face, int face_index, int before, int
     if (after >= 0) m_after_cell = &cells.at(after);
     for (const GasCell* c : {m_a, m_b})
         if (c->length > 0.0) m_inertance += 0.5 * c->length / c->flow_area;
+    m_oscillating.omega = driveAngularFrequency(cells);
+    m_tube_a = m_a->length > 0.0 && isOpenTube(m_a->passage);
+    m_tube_b = m_b->length > 0.0 && isOpenTube(m_b->passage);
     if (m_inertance <= 0.0)
         throw std::logic_error("face " + face.name + " joins two lumped volumes: it has no "
                                "inertance (put a passage or an orifice between them)");
@@ -58,18 +61,27 @@ MomentumFace::Result<S> MomentumFace::compute(const GasState<S>* before, const G
     const double eps = v.flow_smoothing;
     const double cp = v.properties->cp;
     S drop(0.0);
+    S inertance(0.0);
     S resistance(0.0); // thermal, [K/W]
     bool conducts = false;
-    auto half = [&](const GasCell& c, const GasState<S>& g) {
+    auto half = [&](const GasCell& c, const GasState<S>& g, bool tube) {
         if (c.length <= 0.0) return;
         const double l = 0.5 * c.length;
         const PassageFlow<S> pf = passageFlow(*c.passage, c.flow_area, g, mdot, eps, cp);
-        drop += frictionDrop(pf, g, *c.passage, mdot, l, c.flow_area);
+        if (tube && m_oscillating.active()) {
+            const TubeMomentumLaw<S> law = oscillatingTubeMomentum(pf, g, *c.passage, m_oscillating);
+            drop += frictionDrop(law.fRe, g, *c.passage, mdot, l, c.flow_area);
+            inertance += law.inertance_factor * (l / c.flow_area);
+        } else {
+            drop += frictionDrop(steadyFrictionTimesReynolds(pf, *c.passage), g, *c.passage, mdot,
+                                 l, c.flow_area);
+            inertance += l / c.flow_area;
+        }
         resistance += l / (g.k * pf.dispersion * c.flow_area);
         conducts = true;
     };
-    half(*m_a, a);
-    half(*m_b, b);
+    half(*m_a, a, m_tube_a);
+    half(*m_b, b, m_tube_b);
 
     using RC = ReconstructionCell<S>;
     const RC cell_before{before ? &before->T : nullptr, before ? m_before_cell->x : 0.0,
@@ -92,7 +104,7 @@ MomentumFace::Result<S> MomentumFace::compute(const GasState<S>* before, const G
     r.rate[1] = -r.enthalpy_flow - r.conduction;
     r.rate[2] = mdot;
     r.rate[3] = r.enthalpy_flow + r.conduction;
-    r.rate[4] = (a.p - b.p - drop) / m_inertance;
+    r.rate[4] = (a.p - b.p - drop) / inertance;
     return r;
 }
 

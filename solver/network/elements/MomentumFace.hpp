@@ -4,8 +4,13 @@
 //! The face's control volume spans the downstream half of cell a and the upstream half of
 //! cell b (staggered MAC arrangement, Harlow & Welch 1965; Patankar 1980 ch. 6):
 //!
-//!   L dmdot/dt = p_a - p_b - dp_a - dp_b,        L = sum_h (l_h / A_h)      [1/m]
+//!   L dmdot/dt = p_a - p_b - dp_a - dp_b,        L = sum_h K_L,h (l_h / A_h) [1/m]
 //!   dp_h = (f Re)_h mu_h l_h mdot / (2 rho_h A_h d_h^2)                      [Pa]
+//!
+//! K_L = 1 except in open tubes driven at a frequency, where K_L and f Re follow the
+//! oscillating-flow closure of PassageLaws.hpp (Womersley below the Stokes-layer
+//! transition, quasi-steady above): L then depends on the state, and the rate
+//! (p_a - p_b - dp)/L is differentiated as a whole, so the Jacobian stays exact.
 //!
 //! (Darcy friction f = (f Re)/Re on the hydraulic diameter d_h and pore velocity
 //! mdot/(rho A_h); l_h = half the cell length, A_h its flow area.) The convective momentum
@@ -23,6 +28,7 @@
 //! with F the passage's thermal-dispersion factor (1 for plain channels).
 
 #include "solver/network/Element.hpp"
+#include "solver/network/elements/PassageLaws.hpp"
 
 namespace coldtip {
 
@@ -38,8 +44,10 @@ public:
     void evaluate(const NetworkView& v, double* ydot, double* quad) const override;
     void addJacobian(const NetworkView& v, double* values) const override;
 
-    //! Inertance coefficient L = sum l_h/A_h [1/m] (mdot form).
+    //! Geometric inertance coefficient sum l_h/A_h [1/m] (mdot form), before K_L.
     double inertance() const { return m_inertance; }
+    //! Critical Stokes-layer Reynolds number of the oscillating-flow transition [-].
+    void setCriticalStokesReynolds(double re) { m_oscillating.critical_re_delta = re; }
 
     //! Rates of (m_a, E_a, m_b, E_b, mdot) and the face's enthalpy flow and conduction.
     template <class S>
@@ -62,6 +70,8 @@ private:
     const GasCell* m_before_cell = nullptr;
     const GasCell* m_after_cell = nullptr;
     double m_inertance = 0.0;
+    OscillatingFlow m_oscillating;
+    bool m_tube_a = false, m_tube_b = false; //!< half cells with the oscillating closure
     int m_quad_h, m_quad_q;
 };
 

@@ -17,6 +17,7 @@ WallHeatTransfer::WallHeatTransfer(int cell, int face_in, int face_out, int soli
     if (!m_c->passage || m_c->length <= 0.0)
         throw std::logic_error("wall heat transfer needs a passage cell: " + m_c->name);
     m_area = m_c->passage->wettedAreaPerVolume() * m_c->frontal_area * m_c->length;
+    if (isOpenTube(m_c->passage)) m_oscillating.omega = driveAngularFrequency(cells);
     if (face_in >= 0) m_face_in_offset = faces.at(face_in).offset;
     if (face_out >= 0) m_face_out_offset = faces.at(face_out).offset;
     auto& s = m_stencil;
@@ -53,7 +54,9 @@ S WallHeatTransfer::heatToGas(const GasState<S>& g, const S& mdot_in, const S& m
     const S mdot = meanFlow(mdot_in, mdot_out);
     const PassageFlow<S> f = passageFlow(passage, m_c->flow_area, g, mdot, v.flow_smoothing,
                                          v.properties->cp);
-    const S Nu = nusselt(passage, f.Re, f.Pr);
+    const S Nu = m_oscillating.active()
+                     ? oscillatingTubeNusselt(f, g, passage, v.properties->cp, m_oscillating)
+                     : nusselt(passage, f.Re, f.Pr);
     const S h = Nu * g.k / passage.hydraulicDiameter();
     return h * m_area * (T_s - g.T);
 }

@@ -7,8 +7,11 @@
 //! with a the passage's wetted area per unit volume and Re on the cell's mean face flow
 //! (mean of the mass flows on its two faces, smoothed |.|). The solid side is a solid node
 //! (matrix, tube wall, cold-head body: Q is taken from it) or a fixed-temperature wall.
+//! In an open tube driven at a frequency, Nu follows the oscillating-flow closure of
+//! PassageLaws.hpp (Rott's thermal function below the Stokes-layer transition).
 
 #include "solver/network/Element.hpp"
+#include "solver/network/elements/PassageLaws.hpp"
 
 namespace coldtip {
 
@@ -26,6 +29,8 @@ public:
 
     //! Wetted area A_w [m^2].
     double wettedArea() const { return m_area; }
+    //! Critical Stokes-layer Reynolds number of the oscillating-flow transition [-].
+    void setCriticalStokesReynolds(double re) { m_oscillating.critical_re_delta = re; }
 
     template <class S>
     S heatToGas(const GasState<S>& g, const S& mdot_in, const S& mdot_out, const S& T_s,
@@ -38,6 +43,7 @@ private:
     int m_face_in_offset = -1, m_face_out_offset = -1;
     double m_wall_temperature;
     double m_area = 0.0;
+    OscillatingFlow m_oscillating; //!< inactive unless the cell is an open tube
     const GasCell* m_c;
     int m_quad_heat;
 };
