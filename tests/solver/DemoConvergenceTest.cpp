@@ -29,11 +29,9 @@ Converged convergedDemo(int cells)
             c.cells = cells;
     Machine machine(d);
     CycleRunner runner(machine, CycleRunner::optionsFor(machine));
-    ShootingReport report;
     const SteadyOptions options = steadyOptionsFor(d);
     Converged c;
-    c.outcome = solveSteadyState(runner, 0, machine.initialState(), options, "accelerated",
-                                 report);
+    c.outcome = solveSteadyState(runner, 0, machine.initialState(), options, "accelerated");
     const CycleMetrics& m = c.outcome.metrics;
     c.carnot_cop = m.cold_temperature / (m.reject_temperature - m.cold_temperature);
     return c;
