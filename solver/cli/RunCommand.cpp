@@ -78,7 +78,10 @@ int runCase(const RunOptions& opt, const RunInfo& info)
                                       report.krylov_iterations[i], mu));
         }
 
-    std::string status = out.converged ? "converged" : "max-cycles";
+    std::string status = out.converged ? "converged" : "not-converged";
+    if (!out.converged && !out.failed && !interrupted())
+        out.failure = fmt::format("no periodic steady state after {} cycles: {}",
+                                  out.history.size(), convergenceShortfall(out.metrics, o));
     if (interrupted()) status = "interrupted";
     if (out.failed) status = "failed";
     const RunSummary summary = save(out, status);
@@ -87,6 +90,11 @@ int runCase(const RunOptions& opt, const RunInfo& info)
         fmt::print(stderr, "error: solver failure after {} complete cycles: {}\n"
                            "the last complete cycle is in {}\n",
                    out.history.size(), out.failure, out_path);
+        return kExitSolverFailure;
+    }
+    if (!out.converged && !interrupted()) {
+        fmt::print(stderr, "error: {}\nthe last cycle is in {} (status not-converged)\n",
+                   out.failure, out_path);
         return kExitSolverFailure;
     }
     const CycleMetrics& m = out.metrics;

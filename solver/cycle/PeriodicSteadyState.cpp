@@ -2,6 +2,7 @@
 
 #include <chrono>
 #include <cmath>
+#include <fmt/format.h>
 
 namespace coldtip {
 
@@ -30,6 +31,24 @@ bool steadyStateReached(const CycleMetrics& m, const SteadyOptions& o, long cycl
     return cycles >= o.min_cycles && m.heat_residual <= o.heat_residual &&
            std::abs(m.energy_balance_error) <= o.energy_residual &&
            m.distance_estimate <= o.temperature_tolerance;
+}
+
+std::string convergenceShortfall(const CycleMetrics& m, const SteadyOptions& o)
+{
+    std::string s;
+    auto add = [&](const std::string& part) { s += (s.empty() ? "" : "; ") + part; };
+    if (!(m.heat_residual <= o.heat_residual))
+        add(fmt::format("heat residual {:.3g} of the cooling power at {} (tolerance {:.3g})",
+                        m.heat_residual, m.worst_solid, o.heat_residual));
+    if (!(std::abs(m.energy_balance_error) <= o.energy_residual))
+        add(fmt::format("energy balance error {:.3g} of PV power (tolerance {:.3g})",
+                        m.energy_balance_error, o.energy_residual));
+    if (!(m.distance_estimate <= o.temperature_tolerance))
+        add(std::isfinite(m.distance_estimate)
+                ? fmt::format("estimated distance to the steady state {:.3g} K (tolerance {:.3g} K)",
+                              m.distance_estimate, o.temperature_tolerance)
+                : std::string("temperatures still changing without settling"));
+    return s;
 }
 
 double DistanceEstimate::add(double change)

@@ -87,6 +87,8 @@ std::vector<std::string> boundaryEnthalpyNames(const Machine& machine);
 
 //! The convergence test on one cycle's metrics.
 bool steadyStateReached(const CycleMetrics& m, const SteadyOptions& o, long cycles);
+//! Which parts of the test a cycle fails, in words ("" if none).
+std::string convergenceShortfall(const CycleMetrics& m, const SteadyOptions& o);
 
 //! Integrate period after period from (period_index, y0) until converged, failed or
 //! max_cycles. `on_cycle` (may be empty) sees the outcome after every cycle (progress,

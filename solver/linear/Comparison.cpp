@@ -3,7 +3,7 @@
 #include <cmath>
 
 #include "solver/cycle/Harmonics.hpp"
-#include "solver/network/elements/OrificeLink.hpp"
+#include "solver/linear/OrificePhasors.hpp"
 
 namespace coldtip {
 
@@ -12,9 +12,7 @@ FirstHarmonics cycleHarmonics(const Machine& machine, const CycleSamples& sample
     const Network& net = machine.network();
     const GasProperties& gas = net.gas();
     const std::size_t n = samples.time.size(), nc = net.cells().size(), nf = net.faces().size();
-    std::vector<const OrificeLink*> orifices;
-    for (const auto& e : net.elements())
-        if (const auto* o = dynamic_cast<const OrificeLink*>(e.get())) orifices.push_back(o);
+    const std::vector<OrificeOnPath> orifices = networkOrifices(net);
     std::vector<std::vector<double>> p(nc, std::vector<double>(n)), T = p, rho = p;
     std::vector<std::vector<double>> mdot(nf, std::vector<double>(n));
     std::vector<std::vector<double>> orifice(orifices.size(), std::vector<double>(n));
@@ -29,16 +27,12 @@ FirstHarmonics cycleHarmonics(const Machine& machine, const CycleSamples& sample
             rho[i][j] = g.rho;
         }
         for (std::size_t f = 0; f < nf; ++f) mdot[f][j] = y[net.faces()[f].offset];
-        if (orifices.empty()) continue;
-        const NetworkView v = net.view(t, y);
         for (std::size_t o = 0; o < orifices.size(); ++o) {
-            const auto& st = orifices[o]->stencil();
-            int a = 0, b = 0;
-            for (std::size_t i = 0; i < nc; ++i) {
-                if (net.cells()[i].offset == st.input(0)) a = static_cast<int>(i);
-                if (net.cells()[i].offset == st.input(2)) b = static_cast<int>(i);
-            }
-            orifice[o][j] = orifices[o]->compute((*v.gas)[a], (*v.gas)[b], v).mass_flow;
+            auto gasOf = [&](int i) {
+                const GasCell& c = net.cells()[i];
+                return gasState(y[c.offset], y[c.offset + 1], c.volumeAt(t), gas);
+            };
+            orifice[o][j] = orificeFlow(net, orifices[o], gasOf(orifices[o].from), gasOf(orifices[o].to));
         }
     }
     // x(t) = X sin(omega t) from a period boundary: the displacement's phasor is -i X.

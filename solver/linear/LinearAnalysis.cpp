@@ -178,8 +178,8 @@ LinearSolution solveLinear(Machine& machine, const std::vector<double>& y_m)
         s.mass_residual[net.faces()[f].to] -= s.mass_flow[f];
     }
     for (const OrificePhasor& o : orificePhasors(net, y_m, s.state)) {
-        s.mass_residual[o.from] += o.mass_flow;
-        s.mass_residual[o.to] -= o.mass_flow;
+        s.mass_residual[o.orifice.from] += o.mass_flow;
+        s.mass_residual[o.orifice.to] -= o.mass_flow;
         s.orifice_flow.push_back(o.mass_flow);
     }
     return s;

@@ -18,7 +18,7 @@ struct SummaryValue {
 
 struct RunSummary {
     std::string case_name;
-    std::string status;   //!< converged | max-cycles | failed | interrupted
+    std::string status;   //!< converged | not-converged | failed | interrupted | running
     std::string failure;  //!< what failed, if anything
     std::string result_file;
     bool converged = false;
