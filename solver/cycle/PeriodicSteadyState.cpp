@@ -26,6 +26,29 @@ std::vector<double> boundaryEnthalpy(const Machine& machine, const std::vector<d
     return h;
 }
 
+bool appendCycle(SteadyOutcome& out, const Machine& machine, CycleRecord record,
+                 CycleSamples samples, long period_index, double wall_time_s,
+                 DistanceEstimate* distance, const SteadyOptions& options)
+{
+    HistoryRow row;
+    row.cycle = static_cast<long>(out.history.size()) + 1;
+    row.time = record.t_end;
+    row.metrics = cycleMetrics(machine, record);
+    row.metrics.distance_estimate =
+        distance ? distance->add(row.metrics.max_temperature_change) : HUGE_VAL;
+    row.work = record.work;
+    row.boundary_enthalpy = boundaryEnthalpy(machine, record.averages);
+    row.wall_time_s = wall_time_s;
+    out.history.push_back(row);
+    out.metrics = row.metrics;
+    out.state = record.end_state;
+    out.period_index = period_index;
+    out.last = std::move(record);
+    out.samples = std::move(samples);
+    out.wall_time_s = wall_time_s;
+    return steadyStateReached(row.metrics, options, static_cast<long>(out.history.size()));
+}
+
 bool steadyStateReached(const CycleMetrics& m, const SteadyOptions& o, long cycles)
 {
     return cycles >= o.min_cycles && m.heat_residual <= o.heat_residual &&
@@ -54,8 +77,11 @@ std::string convergenceShortfall(const CycleMetrics& m, const SteadyOptions& o)
 double DistanceEstimate::add(double change)
 {
     m_changes.push_back(change);
+    // The decay ratio over the last half of the history: a slow mode (multiplier 0.9999)
+    // changes the ratio over ten cycles by less than the cycle-to-cycle noise, so a short
+    // span would report it as settled.
     const std::size_t n = m_changes.size();
-    const std::size_t span = std::min<std::size_t>(10, n - 1);
+    const std::size_t span = std::min<std::size_t>(n - 1, std::max<std::size_t>(10, n / 2));
     if (span < 2 || change <= 0.0) return change <= 0.0 ? 0.0 : HUGE_VAL;
     const double before = m_changes[n - 1 - span];
     if (!(before > change)) return HUGE_VAL;
@@ -85,22 +111,10 @@ SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
             out.failure = e.what();
             break;
         }
-        HistoryRow row;
-        row.cycle = record.cycle;
-        row.time = record.t_end;
-        row.metrics = cycleMetrics(machine, record);
-        row.metrics.distance_estimate = distance.add(row.metrics.max_temperature_change);
-        row.work = record.work;
-        row.boundary_enthalpy = boundaryEnthalpy(machine, record.averages);
-        row.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();
-        out.history.push_back(row);
-        out.metrics = row.metrics;
-        out.state = record.end_state;
-        out.period_index = runner.periodIndex();
-        out.last = std::move(record);
-        out.samples = std::move(samples);
-        out.wall_time_s = row.wall_time_s;
-        out.converged = steadyStateReached(row.metrics, options, n);
+        out.converged = appendCycle(out, machine, std::move(record), std::move(samples),
+                                    runner.periodIndex(),
+                                    std::chrono::duration<double>(Clock::now() - t0).count(),
+                                    &distance, options);
         if (on_cycle && !on_cycle(out)) break;
         if (out.converged) break;
     }

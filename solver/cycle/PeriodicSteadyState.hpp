@@ -12,8 +12,8 @@
 //!     time constant of 10^4 cycles) is still tens of kelvin away,
 //! after at least min_cycles periods. Plain integration estimates the distance by
 //! geometric extrapolation of the largest temperature change per cycle d_n with the decay
-//! ratio mu of the last cycles, d_n mu / (1 - mu) (Aitken's delta-squared idea; the
-//! dominant-eigenvalue method of Crowe & Nishio, AIChE J. 1975).
+//! ratio mu over the last half of the history, d_n mu / (1 - mu) (Aitken's delta-squared
+//! idea; the dominant-eigenvalue method of Crowe & Nishio, AIChE J. 1975).
 
 #include <complex>
 #include <functional>
@@ -34,16 +34,6 @@ struct SteadyOptions {
     int samples_per_cycle = 96;
 };
 
-//! Distance to the steady state from the largest temperature change per cycle.
-class DistanceEstimate {
-public:
-    //! Add cycle n's largest change d_n [K]; returns the estimated distance [K] (infinite
-    //! until the change decays geometrically).
-    double add(double change);
-
-private:
-    std::vector<double> m_changes;
-};
 
 //! One row of the per-cycle history.
 struct HistoryRow {
@@ -53,6 +43,17 @@ struct HistoryRow {
     IntegratorStats work;
     std::vector<double> boundary_enthalpy; //!< cycle-mean enthalpy flow per component boundary [W]
     double wall_time_s = 0.0;
+};
+
+//! Distance to the steady state from the largest temperature change per cycle.
+class DistanceEstimate {
+public:
+    //! Add cycle n's largest change d_n [K]; returns the estimated distance [K] (infinite
+    //! until the change decays geometrically).
+    double add(double change);
+
+private:
+    std::vector<double> m_changes;
 };
 
 //! How the steady state was reached: effort, and the accelerator's own diagnostics.
@@ -84,6 +85,13 @@ struct SteadyOutcome {
 //! boundaryEnthalpyNames().
 std::vector<double> boundaryEnthalpy(const Machine& machine, const std::vector<double>& averages);
 std::vector<std::string> boundaryEnthalpyNames(const Machine& machine);
+
+//! Append one integrated cycle to the outcome: its history row (with the given distance
+//! estimate; +inf: use the change per cycle extrapolated by `distance`), the last cycle,
+//! the state; returns whether it passes the convergence test.
+bool appendCycle(SteadyOutcome& out, const Machine& machine, CycleRecord record,
+                 CycleSamples samples, long period_index, double wall_time_s,
+                 DistanceEstimate* distance, const SteadyOptions& options);
 
 //! The convergence test on one cycle's metrics.
 bool steadyStateReached(const CycleMetrics& m, const SteadyOptions& o, long cycles);

@@ -197,24 +197,10 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
         CycleSamples samples;
         CycleRecord record = runner.runCycle(&samples, options.samples_per_cycle);
         ++report.cycle_equivalents;
-        HistoryRow row;
-        row.cycle = static_cast<long>(out.history.size()) + 1;
-        row.time = record.t_end;
-        row.metrics = cycleMetrics(machine, record);
-        row.metrics.distance_estimate =
-            newton_phase ? HUGE_VAL : extrapolation.add(row.metrics.max_temperature_change);
-        row.work = record.work;
-        row.boundary_enthalpy = boundaryEnthalpy(machine, record.averages);
-        row.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();
-        out.history.push_back(row);
-        out.metrics = row.metrics;
-        out.state = record.end_state;
-        out.period_index = runner.periodIndex();
-        out.last = std::move(record);
-        out.samples = std::move(samples);
-        out.wall_time_s = row.wall_time_s;
-        out.converged =
-            steadyStateReached(row.metrics, options, static_cast<long>(out.history.size()));
+        out.converged = appendCycle(out, machine, std::move(record), std::move(samples),
+                                    runner.periodIndex(),
+                                    std::chrono::duration<double>(Clock::now() - t0).count(),
+                                    newton_phase ? nullptr : &extrapolation, options);
         if (on_cycle && !on_cycle(out)) stop = true;
         return out.converged || stop ||
                static_cast<long>(out.history.size()) >= options.max_cycles;
