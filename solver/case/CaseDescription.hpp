@@ -64,11 +64,64 @@ struct FillSpec {
     SourceMark mark;
 };
 
+//! A conductive link from a cold-head body to another body or to the exchanger's own body:
+//! a constant conductance (a bolted or clamped joint) or a conductor of a material, length
+//! and cross-section without heat capacity of its own (a strap, a rod), whose heat flow is
+//! the conductivity integral of the NIST fit, Q = (A/L) integral_{T_b}^{T_a} k dT.
+struct ThermalLinkSpec {
+    std::string to;           //!< body name or the exchanger's component name ("" = the exchanger)
+    double conductance = 0.0; //!< [W/K] constant; 0 = from material, length, area
+    std::string material;     //!< conductor material
+    double length = 0.0;      //!< [m]
+    double area = 0.0;        //!< [m^2] cross-section
+    SourceMark mark;
+};
+
+//! A lumped body of the cold head besides the exchanger's own body (a cold block, the
+//! detector mount): one temperature, heat capacity m c_p(T) of its material.
+struct ColdBodySpec {
+    std::string name;
+    std::string material;
+    double mass = 0.0;                //!< [kg]
+    double initial_temperature = 0.0; //!< [K]; 0 = the exchanger body's
+    ThermalLinkSpec link;
+    SourceMark mark;
+};
+
+//! A heat load on a cold-head body, from outside the machine:
+//!  - Constant: `power`.
+//!  - Schedule: `powers` at `times` (physical time of the run), linear in between, held
+//!    outside (C0 at the table points).
+//!  - Table: `powers` at body `temperatures`, linear in between, held outside.
+//!  - Radiation: from a surrounding surface at `ambient_temperature`,
+//!    Q = sigma eps A (T_amb^4 - T^4), eps = `mli_emissivity` if given, else `emissivity`.
+//!  - Support: conduction through `count` supports of `material`, `length` and `area`
+//!    from `ambient_temperature`: Q = count (A/L) integral_T^{T_amb} k dT.
+struct ColdLoadSpec {
+    enum class Kind { Constant, Schedule, Table, Radiation, Support };
+    std::string name;
+    Kind kind = Kind::Constant;
+    std::string on;                   //!< body name or the exchanger ("" = the exchanger)
+    double power = 0.0;               //!< [W] constant
+    std::vector<double> times;        //!< [s] schedule, increasing
+    std::vector<double> temperatures; //!< [K] table, increasing
+    std::vector<double> powers;       //!< [W] schedule or table values
+    double area = 0.0;                //!< [m^2] radiating surface, support cross-section
+    double emissivity = 0.0;          //!< [-] radiation: effective emissivity
+    double mli_emissivity = 0.0;      //!< [-] radiation: of a multilayer blanket; 0 = none
+    double ambient_temperature = 0.0; //!< [K] radiation, support; the reader fills it
+    std::string material;             //!< support material
+    double length = 0.0;              //!< [m] support length
+    int count = 1;                    //!< supports in parallel
+    SourceMark mark;
+};
+
 //! The thermal side of a component's wall.
 //!  - Adiabatic: no heat exchange with the gas.
 //!  - Isothermal: wall held at `temperature` (heat exchangers, ducts).
 //!  - LumpedBody: one solid node of `mass` of `material`, under the applied `load`
-//!    (heat exchangers: the cold head), starting at `initial_temperature`.
+//!    (heat exchangers: the cold head), starting at `initial_temperature`; further
+//!    `bodies` linked to it and `loads` on any of them make the cold-head model.
 //!  - Conducting: a wall of `material` and `thickness`, one solid node per cell, with
 //!    axial conduction (pulse tube wall).
 struct WallSpec {
@@ -80,6 +133,8 @@ struct WallSpec {
     double load = 0.0;                //!< [W] heat applied to the lumped body
     double initial_temperature = 0.0; //!< [K] lumped body; 0 = use the initial profile
     double thickness = 0.0;           //!< [m] conducting wall
+    std::vector<ColdBodySpec> bodies; //!< lumped body: further cold-head bodies
+    std::vector<ColdLoadSpec> loads;  //!< lumped body: loads on the cold head
     SourceMark mark;
 };
 
@@ -158,6 +213,23 @@ struct InitialSpec {
     double cold_temperature = 0.0; //!< [K]
 };
 
+//! The cooldown transient (`coldtip cooldown`): from a uniform start until the cold end
+//! settles or the time limit.
+struct CooldownSpec {
+    double start_temperature = 0.0;  //!< [K] uniform start; 0 = the reject temperature
+    double time_limit = 4.0 * 3600.0; //!< [s] physical time
+    std::vector<double> report_at;   //!< [K] cold-end temperatures whose times are reported
+    //! [K] the cold end has settled when its estimated distance to the steady state is
+    //! below this
+    double settle_tolerance = 0.05;
+    std::string method = "accelerated"; //!< accelerated | plain
+    double relative_tolerance = 1e-4;   //!< accelerated: of the slow temperature ODE
+    double settle_residual = 1e-3; //!< accelerated: cycle-to-cycle change of the averaged
+                                   //!< heat flows, relative to the cooling power reference
+    int max_settle_cycles = 12;    //!< accelerated: cycles per averaged heat-flow evaluation
+    SourceMark mark;
+};
+
 struct CaseDescription {
     std::string name;
     std::string description;
@@ -169,6 +241,7 @@ struct CaseDescription {
     SolverSpec solver;
     OutputSpec output;
     InitialSpec initial;
+    CooldownSpec cooldown;
     std::string source_path; //!< the case file as given on the command line
     std::string source_text; //!< its full text, stored in the result file
     //! Where every key and list element given in the file sits, by key path

@@ -38,8 +38,10 @@ int main(int argc, char** argv)
     addCheckCommand(app, action, context);
     addPlotCommand(app, action, context);
     addKeysCommand(app, action, context);
+    addProfileCommand(app, action, context);
     addLinearCommand(app, action, context);
     addCompareCommand(app, action, context);
+    addCooldownCommand(app, action, context);
     try {
         app.parse(argc, argv);
     } catch (const CLI::ParseError& e) {

@@ -28,8 +28,10 @@ void addRunCommand(CLI::App& app, Action& action, const CommandContext& context)
 void addCheckCommand(CLI::App& app, Action& action, const CommandContext& context);
 void addPlotCommand(CLI::App& app, Action& action, const CommandContext& context);
 void addKeysCommand(CLI::App& app, Action& action, const CommandContext& context);
+void addProfileCommand(CLI::App& app, Action& action, const CommandContext& context);
 void addLinearCommand(CLI::App& app, Action& action, const CommandContext& context);
 void addCompareCommand(CLI::App& app, Action& action, const CommandContext& context);
+void addCooldownCommand(CLI::App& app, Action& action, const CommandContext& context);
 
 //! SIGINT/SIGTERM set a flag that long commands poll between cycles.
 void watchInterrupts();

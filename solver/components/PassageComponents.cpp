@@ -74,7 +74,10 @@ void HeatExchanger::addNodes(AssemblyContext& ctx, double T_in, double T_out)
     body.initial_temperature = T;
     body.layers.push_back({&ctx.materials.table(m_spec.wall.material), m_spec.wall.mass, 0.0});
     m_body = ctx.network.addSolid(body);
-    m_first_solid = m_last_solid = m_body;
+    m_head = std::make_unique<ColdHead>(m_spec.wall, name(), m_index);
+    m_head->addNodes(ctx, m_body, T, body.x);
+    m_first_solid = m_body;
+    m_last_solid = m_head->bodyNodes().back();
     ThermalBoundary b;
     b.name = name();
     b.component = m_index;
@@ -83,7 +86,8 @@ void HeatExchanger::addNodes(AssemblyContext& ctx, double T_in, double T_out)
     m_boundary = ctx.network.addBoundary(b);
     ComponentSlice& s = slice(ctx);
     s.boundary = m_boundary;
-    s.first_solid = s.last_solid = m_body;
+    s.first_solid = m_first_solid;
+    s.last_solid = m_last_solid;
 }
 
 void HeatExchanger::addElements(AssemblyContext& ctx)
@@ -99,6 +103,7 @@ void HeatExchanger::addElements(AssemblyContext& ctx)
         q.external_sign = +1.0;
         const int ql = net.addQuadrature(q);
         net.addElement<HeatLoad>(m_body, m_spec.wall.load, net.solids(), ql);
+        m_head->addElements(ctx);
     }
 }
 

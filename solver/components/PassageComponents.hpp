@@ -4,6 +4,9 @@
 //! exchanger, regenerator and pulse tube. Each is a row of gas cells joined by momentum
 //! faces; they differ in what the gas exchanges heat with.
 
+#include <memory>
+
+#include "solver/components/ColdHead.hpp"
 #include "solver/components/Component.hpp"
 
 namespace coldtip {
@@ -20,7 +23,8 @@ public:
 };
 
 //! Heat exchanger: a filled passage whose wall is held at a temperature (aftercooler, warm
-//! end) or is a lumped body of given mass and material under an applied load (cold head).
+//! end) or is a lumped body of given mass and material under an applied load, with the
+//! further bodies, links and loads of a cold head (ColdHead.hpp).
 class HeatExchanger final : public Component {
 public:
     using Component::Component;
@@ -31,9 +35,12 @@ public:
     WallContact wallContact() const override;
     //! Solid node of the lumped body, -1 for an isothermal wall.
     int bodyNode() const { return m_body; }
+    //! The cold head on the lumped body (null for an isothermal wall).
+    const ColdHead* coldHead() const { return m_head.get(); }
 
 private:
     int m_body = -1;
+    std::unique_ptr<ColdHead> m_head;
 };
 
 //! Regenerator: matrix (screens or spheres) with one solid node per cell, of temperature-

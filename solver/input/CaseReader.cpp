@@ -41,6 +41,13 @@ constexpr KindRow<Kind> kComponentKinds[] = {
     {"volume", Kind::Volume, Table::Volume},
     {"orifice", Kind::Orifice, Table::Orifice},
 };
+constexpr KindRow<ColdLoadSpec::Kind> kLoadKinds[] = {
+    {"constant", ColdLoadSpec::Kind::Constant, Table::LoadConstant},
+    {"schedule", ColdLoadSpec::Kind::Schedule, Table::LoadSchedule},
+    {"table", ColdLoadSpec::Kind::Table, Table::LoadTable},
+    {"radiation", ColdLoadSpec::Kind::Radiation, Table::LoadRadiation},
+    {"support", ColdLoadSpec::Kind::Support, Table::LoadSupport},
+};
 constexpr KindRow<FillKind> kFillKinds[] = {
     {"slots", FillKind::Slots, Table::FillSlots},
     {"screen", FillKind::Screen, Table::FillScreen},
@@ -197,8 +204,179 @@ FillSpec readFill(const MapReader& component, const KindRow<Kind>& owner)
     return fill;
 }
 
+// The value of `key` in `m`, if given, must name a body of the cold head (`known`, the
+// exchanger first).
+std::string bodyName(const MapReader& m, std::string_view key,
+                     const std::vector<std::string>& known)
+{
+    const std::string name = m.optionalText(key).value_or("");
+    if (name.empty() || std::find(known.begin(), known.end(), name) != known.end())
+        return name;
+    m.fail(key,
+           fmt::format("no body of this cold head is named '{}'{}", name,
+                       didYouMean(name, known)),
+           "one of: " + joinWords(known));
+}
+
+// A conductive link: a conductance, or a strap of material, length and area; not both.
+ThermalLinkSpec readLink(const MapReader& body, const std::string& self,
+                         const std::vector<std::string>& known)
+{
+    const MapReader m = body.map("link");
+    ThermalLinkSpec link;
+    link.mark = m.mark();
+    link.to = bodyName(m, "to", known);
+    if (link.to == self)
+        m.fail("to", fmt::format("body '{}' is linked to itself", self),
+               "another body or the exchanger");
+    const std::string strapForm = "either {conductance} or {material, length, area}";
+    if (m.has("conductance")) {
+        for (const char* key : {"material", "length", "area"})
+            if (m.has(key))
+                m.fail(key,
+                       fmt::format("'{}' is a key of a strap, but 'conductance' (line {}) "
+                                   "makes the link a joint",
+                                   key, m.markOf("conductance").line),
+                       strapForm);
+        link.conductance = m.quantity("conductance");
+        return link;
+    }
+    if (!m.has("material") && !m.has("length") && !m.has("area"))
+        m.failHere("the link has neither a conductance nor a strap", strapForm);
+    for (const char* key : {"material", "length", "area"})
+        m.require(key, " (a strap needs its material, length and area)");
+    link.material = m.choice("material");
+    link.length = m.quantity("length");
+    link.area = m.quantity("area");
+    return link;
+}
+
+ColdBodySpec readBody(const Element& element, const ReadContext& context, NameBook& names,
+                      const std::vector<std::string>& known)
+{
+    const MapReader m(element.node, element.mark, context, {Table::ColdBody});
+    ColdBodySpec b;
+    b.name = names.claim(m);
+    b.mark = m.mark();
+    b.material = m.choice("material");
+    b.mass = m.quantity("mass");
+    b.initial_temperature = m.optionalQuantity("initial_temperature").value_or(0.0);
+    b.link = readLink(m, b.name, known);
+    return b;
+}
+
+// Points of a table load: `x` strictly increasing, as many powers as points.
+void checkTable(const MapReader& m, std::string_view key, const std::vector<double>& x,
+                const std::vector<double>& powers)
+{
+    if (x.empty())
+        m.fail(key, "the table is empty", "a list of at least one value");
+    if (powers.size() != x.size())
+        m.fail("powers",
+               fmt::format("{} powers for {} {}", powers.size(), x.size(), key),
+               fmt::format("one power per entry of {}", key));
+    for (std::size_t i = 1; i < x.size(); ++i)
+        if (!(x[i] > x[i - 1]))
+            m.fail(key, fmt::format("entry {} is not above entry {}", i, i - 1),
+                   fmt::format("{} in increasing order", key));
+}
+
+ColdLoadSpec readLoad(const Element& element, const ReadContext& context, NameBook& names,
+                      const std::vector<std::string>& known, double ambient)
+{
+    const std::string kindName =
+        MapReader(element.node, element.mark, context, {Table::ColdLoad}, Unknown::Allow)
+            .choice("kind");
+    const KindRow<ColdLoadSpec::Kind>& row = rowNamed(kLoadKinds, kindName);
+    const MapReader m(element.node, element.mark, context, {Table::ColdLoad, row.table});
+    ColdLoadSpec l;
+    l.name = names.claim(m);
+    l.kind = row.kind;
+    l.mark = m.mark();
+    l.on = bodyName(m, "on", known);
+    using K = ColdLoadSpec::Kind;
+    switch (row.kind) {
+    case K::Constant: l.power = m.quantity("power"); break;
+    case K::Schedule:
+        l.times = m.quantities("times");
+        l.powers = m.quantities("powers");
+        checkTable(m, "times", l.times, l.powers);
+        break;
+    case K::Table:
+        l.temperatures = m.quantities("temperatures");
+        l.powers = m.quantities("powers");
+        checkTable(m, "temperatures", l.temperatures, l.powers);
+        break;
+    case K::Radiation:
+        l.area = m.quantity("area");
+        if (!m.has("emissivity") && !m.has("mli_emissivity"))
+            m.failHere("missing required key 'emissivity' (or 'mli_emissivity' for a body "
+                       "in multilayer insulation)",
+                       "emissivity, mli_emissivity or both (mli_emissivity then counts)");
+        l.emissivity = m.optionalQuantity("emissivity").value_or(0.0);
+        l.mli_emissivity = m.optionalQuantity("mli_emissivity").value_or(0.0);
+        l.ambient_temperature = m.optionalQuantity("ambient_temperature").value_or(ambient);
+        break;
+    case K::Support:
+        l.material = m.choice("material");
+        l.length = m.quantity("length");
+        l.area = m.quantity("area");
+        l.count = m.integer("count");
+        l.ambient_temperature = m.optionalQuantity("ambient_temperature").value_or(ambient);
+        break;
+    }
+    return l;
+}
+
+// Every body must reach the exchanger by following its link (one link per body): a chain
+// that comes back on itself is a group of bodies the machine cannot cool.
+void checkBodiesAttached(const MapReader& wall, const std::string& exchanger,
+                         const std::vector<ColdBodySpec>& bodies)
+{
+    for (const ColdBodySpec& start : bodies) {
+        std::vector<std::string> chain = {start.name};
+        std::string next = start.link.to;
+        while (!next.empty() && next != exchanger) {
+            const bool loop = std::find(chain.begin(), chain.end(), next) != chain.end();
+            chain.push_back(next);
+            if (loop) {
+                std::string path;
+                for (const std::string& name : chain)
+                    path += (path.empty() ? "" : " -> ") + name;
+                wall.fail("bodies",
+                          fmt::format("the links {} form a loop that does not reach the "
+                                      "exchanger '{}'",
+                                      path, exchanger),
+                          "every body linked, directly or through other bodies, to the "
+                          "exchanger");
+            }
+            next = std::find_if(bodies.begin(), bodies.end(), [&](const ColdBodySpec& b) {
+                       return b.name == next;
+                   })->link.to;
+        }
+    }
+}
+
+// The cold-head part of a lumped wall: bodies with their links, then loads.
+void readColdHead(const MapReader& m, const std::string& exchanger, const ReadContext& context,
+                  NameBook& names, double ambient, WallSpec& wall)
+{
+    const std::vector<Element> bodies = m.list("bodies");
+    std::vector<std::string> known = {exchanger};
+    for (const Element& element : bodies)
+        known.push_back(
+            MapReader(element.node, element.mark, context, {Table::ColdBody}, Unknown::Allow)
+                .text("name"));
+    for (const Element& element : bodies)
+        wall.bodies.push_back(readBody(element, context, names, known));
+    checkBodiesAttached(m, exchanger, wall.bodies);
+    for (const Element& element : m.list("loads"))
+        wall.loads.push_back(readLoad(element, context, names, known, ambient));
+}
+
 // A heat exchanger's wall: held at a temperature, or a lumped body; never both.
-WallSpec readExchangerWall(const MapReader& component)
+WallSpec readExchangerWall(const MapReader& component, const ReadContext& context,
+                           NameBook& names, const std::string& exchanger, double ambient)
 {
     const MapReader m = component.map("wall");
     WallSpec wall;
@@ -231,11 +409,12 @@ WallSpec readExchangerWall(const MapReader& component)
     wall.mass = m.quantity("mass");
     wall.load = m.quantity("load");
     wall.initial_temperature = m.optionalQuantity("initial_temperature").value_or(0.0);
+    readColdHead(m, exchanger, context, names, ambient, wall);
     return wall;
 }
 
 ComponentSpec readComponent(const Element& element, const ReadContext& context,
-                            NameBook& names)
+                            NameBook& names, double ambient)
 {
     const std::string kindName =
         MapReader(element.node, element.mark, context, {Table::Component}, Unknown::Allow)
@@ -259,7 +438,7 @@ ComponentSpec readComponent(const Element& element, const ReadContext& context,
     case Kind::HeatExchanger:
         readPassage(m, c);
         c.fill = readFill(m, row);
-        c.wall = readExchangerWall(m);
+        c.wall = readExchangerWall(m, context, names, c.name, ambient);
         c.role = m.optionalChoice("role").value_or("");
         break;
     case Kind::Regenerator:
@@ -367,6 +546,21 @@ SolverSpec readSolver(const MapReader& m)
     return solver;
 }
 
+CooldownSpec readCooldown(const MapReader& m)
+{
+    CooldownSpec cooldown;
+    cooldown.mark = m.mark();
+    cooldown.start_temperature = m.optionalQuantity("start_temperature").value_or(0.0);
+    cooldown.time_limit = m.quantity("time_limit");
+    cooldown.report_at = m.quantities("report_at");
+    cooldown.settle_tolerance = m.quantity("settle_tolerance");
+    cooldown.method = m.choice("method");
+    cooldown.relative_tolerance = m.quantity("relative_tolerance");
+    cooldown.settle_residual = m.quantity("settle_residual");
+    cooldown.max_settle_cycles = m.integer("max_settle_cycles");
+    return cooldown;
+}
+
 // The single YAML document in `text`, or an InputError for an empty or malformed file.
 YAML::Node loadDocument(const std::string& text, const ReadContext& context)
 {
@@ -425,13 +619,15 @@ CaseDescription parseCaseText(const std::string& text, const std::string& pathFo
     c.drive = readDrive(top.map("drive"));
     NameBook names;
     for (const Element& element : top.list("components"))
-        c.components.push_back(readComponent(element, context, names));
+        c.components.push_back(
+            readComponent(element, context, names, c.gas.charge_temperature));
     for (const Element& element : top.list("links"))
         c.links.push_back(readLink(element, context, names, c.components));
     c.solver = readSolver(top.map("solver"));
     c.output.samples_per_cycle = top.map("output").integer("samples_per_cycle");
     c.initial.cold_temperature =
         top.map("initial").optionalQuantity("cold_temperature").value_or(0.0);
+    c.cooldown = readCooldown(top.map("cooldown"));
     return c;
 }
 

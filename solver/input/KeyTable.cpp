@@ -59,6 +59,14 @@ Key quantity(std::string key, Dimension dimension, Range range, std::string help
     return k;
 }
 
+Key quantities(std::string key, Dimension dimension, Range range, std::string help)
+{
+    Key k(std::move(key), V::Quantities, std::move(help));
+    k.e.dimension = dimension;
+    k.e.range = range;
+    return k;
+}
+
 Key integer(std::string key, Range range, std::string help)
 {
     return Key(std::move(key), V::Integer, std::move(help)).in(range);
@@ -147,6 +155,16 @@ Key porosityKey(std::string help)
 {
     return quantity("porosity", D::Dimensionless, kFraction, std::move(help));
 }
+Key ambientKey()
+{
+    return quantity("ambient_temperature", D::Temperature, kPositive,
+                    "temperature of the warm surroundings")
+        .rule("gas.charge_temperature");
+}
+Key powersKey(std::string help)
+{
+    return quantities("powers", D::Power, Range{}, std::move(help)).req();
+}
 
 std::vector<KeyTable> buildTables()
 {
@@ -167,7 +185,8 @@ std::vector<KeyTable> buildTables()
           Key("links", V::List, "connections across the main path").of({Table::Link}),
           map("solver", {Table::Solver}, "integrator and periodic-steady-state controls"),
           map("output", {Table::Output}, "what the result file holds"),
-          map("initial", {Table::Initial}, "initial temperature profile")}},
+          map("initial", {Table::Initial}, "initial temperature profile"),
+          map("cooldown", {Table::Cooldown}, "the cooldown transient (coldtip cooldown)")}},
         {Table::Gas,
          "gas",
          "Working gas and the charge that fills the machine.",
@@ -234,7 +253,82 @@ std::vector<KeyTable> buildTables()
           quantity("mass", D::Mass, kPositive, "body mass").req(),
           quantity("load", D::Power, Range{}, "heat applied to the body").def("0"),
           quantity("initial_temperature", D::Temperature, kPositive,
-                   "starting temperature; absent: from the initial profile")}},
+                   "starting temperature; absent: from the initial profile"),
+          Key("bodies", V::List,
+              "further lumped bodies of the cold head, each linked to this one or another")
+              .of({Table::ColdBody}),
+          Key("loads", V::List, "heat loads on the cold head's bodies, each reported "
+                                "separately")
+              .of({Table::ColdLoad})}},
+        {Table::ColdBody,
+         "bodies[i] of a lumped heat-exchanger wall",
+         "A further lumped body of the cold head (a cold block, a detector mount): one "
+         "temperature, heat capacity mass c_p(T) of its material.",
+         {nameKey(), materialKey("body material").req(),
+          quantity("mass", D::Mass, kPositive, "body mass").req(),
+          quantity("initial_temperature", D::Temperature, kPositive,
+                   "starting temperature; absent: the exchanger body's"),
+          map("link", {Table::BodyLink}, "how it conducts to the rest of the cold head")
+              .req()}},
+        {Table::BodyLink,
+         "link of a cold-head body",
+         "A conductor without heat capacity: a joint of constant conductance, or a strap of a "
+         "material, length and cross-section, Q = (area/length) integral k dT of the NIST fit.",
+         {text("to", "the body it joins: another body's name or the exchanger's; absent: the "
+                     "exchanger"),
+          quantity("conductance", D::ThermalConductance, kPositive,
+                   "constant conductance (a bolted joint); not with material"),
+          materialKey("strap material; with length and area"),
+          quantity("length", D::Length, kPositive, "strap length"),
+          quantity("area", D::Area, kPositive, "strap cross-section")}},
+        {Table::ColdLoad,
+         "loads[i] of a lumped heat-exchanger wall, every kind",
+         "A heat load on a cold-head body; the kind selects its other keys.",
+         {nameKey(),
+          oneOf("kind", {"constant", "schedule", "table", "radiation", "support"},
+                "what the load is")
+              .req(),
+          text("on", "the body it heats; absent: the exchanger's body")}},
+        {Table::LoadConstant,
+         "load with kind: constant",
+         "A constant heat load (a detector's dissipation).",
+         {quantity("power", D::Power, Range{}, "heat into the body").req()}},
+        {Table::LoadSchedule,
+         "load with kind: schedule",
+         "A load scheduled in the run's time: linear between the points (continuous, its "
+         "slope jumps at them), the end values held outside.",
+         {quantities("times", D::Time, Range::atLeast(0.0),
+                     "times from the start of the run, increasing")
+              .req(),
+          powersKey("heat into the body at those times")}},
+        {Table::LoadTable,
+         "load with kind: table",
+         "A load tabulated against the body's temperature: linear between the points "
+         "(continuous, its slope jumps at them), the end values held outside.",
+         {quantities("temperatures", D::Temperature, kPositive,
+                     "body temperatures, increasing")
+              .req(),
+          powersKey("heat into the body at those temperatures")}},
+        {Table::LoadRadiation,
+         "load with kind: radiation",
+         "Radiation from a surrounding surface at ambient: Q = sigma eps area (T_amb^4 - T^4).",
+         {quantity("area", D::Area, kPositive, "radiating surface of the body").req(),
+          quantity("emissivity", D::Dimensionless, Range::aboveUpTo(0.0, 1.0),
+                   "effective emissivity of the bare body")
+              .rule("required without mli_emissivity"),
+          quantity("mli_emissivity", D::Dimensionless, Range::aboveUpTo(0.0, 1.0),
+                   "effective emissivity of a multilayer-insulation blanket; replaces "
+                   "emissivity"),
+          ambientKey()}},
+        {Table::LoadSupport,
+         "load with kind: support",
+         "Conduction through supports from ambient: Q = count (area/length) integral_T^T_amb "
+         "k dT of the NIST fit.",
+         {materialKey("support material").req(),
+          quantity("length", D::Length, kPositive, "support length").req(),
+          quantity("area", D::Area, kPositive, "cross-section of one support").req(),
+          integer("count", Range::atLeast(1), "identical supports in parallel").def("1"),
+          ambientKey()}},
         {Table::Regenerator,
          "components[i] with kind: regenerator",
          "A porous matrix that stores heat from one half-cycle to the next.",
@@ -346,6 +440,34 @@ std::vector<KeyTable> buildTables()
          {quantity(
              "cold_temperature", D::Temperature, kPositive,
              "cold-end start; absent: the cold exchanger's wall or body temperature")}},
+        {Table::Cooldown,
+         "cooldown",
+         "The cooldown transient of `coldtip cooldown`: from a uniform start until the cold "
+         "end settles or the time limit.",
+         {quantity("start_temperature", D::Temperature, kPositive,
+                   "uniform temperature of the whole machine at the start")
+              .rule("the reject exchanger's wall temperature"),
+          quantity("time_limit", D::Time, kPositive, "longest physical time simulated")
+              .def("14400 s"),
+          quantities("report_at", D::Temperature, kPositive,
+                     "cold-end temperatures whose times are reported"),
+          quantity("settle_tolerance", D::Temperature, kPositive,
+                   "settled: estimated distance of the cold end from its steady state "
+                   "(in K)")
+              .def("0.05 K"),
+          oneOf("method", {"accelerated", "plain"},
+                "accelerated: averaged slow temperature equation; plain: every cycle")
+              .def("accelerated"),
+          quantity("relative_tolerance", D::Dimensionless, Range::closed(1e-8, 1e-2),
+                   "accelerated: relative tolerance of the slow temperature equation")
+              .def("1e-4"),
+          quantity("settle_residual", D::Dimensionless, kFraction,
+                   "accelerated: cycle-to-cycle change of the averaged heat flows / "
+                   "cooling power")
+              .def("1e-3"),
+          integer("max_settle_cycles", Range::closed(2, 1000),
+                  "accelerated: most cycles per averaged heat-flow evaluation")
+              .def("12")}},
     };
     for (std::size_t i = 0; i < tables.size(); ++i)
         if (static_cast<std::size_t>(tables[i].id) != i)
@@ -375,6 +497,9 @@ std::string valueColumn(const KeyEntry& e)
     case V::Map: return "map: " + joinWords(titles, "");
     case V::List:
         return titles.empty() ? "list of strings" : "list of: " + joinWords(titles, "");
+    case V::Quantities:
+        return fmt::format("list of {} [{}]", describe(e.dimension).name,
+                           describe(e.dimension).siUnit);
     }
     return {};
 }
@@ -460,6 +585,11 @@ std::string expectation(const KeyEntry& e)
     case V::Enum: return "one of: " + joinWords(e.choices, "");
     case V::Map: return "a map with keys " + joinWords(declaredKeys(e.tables), "");
     case V::List: return e.tables.empty() ? "a list" : "a list of maps";
+    case V::Quantities: {
+        KeyEntry one = e;
+        one.kind = V::Quantity;
+        return "a list, each " + expectation(one);
+    }
     }
     return {};
 }
@@ -480,7 +610,8 @@ std::string keyReferenceMarkdown()
             const std::string byDefault = !e.defaultValue.empty()  ? e.defaultValue
                                           : !e.defaultRule.empty() ? e.defaultRule
                                                                    : std::string();
-            const bool ranged = e.kind == V::Quantity || e.kind == V::Integer;
+            const bool ranged =
+                e.kind == V::Quantity || e.kind == V::Integer || e.kind == V::Quantities;
             md += fmt::format("| `{}` | {} | {} | {} | {} | {} |\n", e.key,
                               valueColumn(e), e.required ? "yes" : "", byDefault,
                               ranged ? e.range.describe(describe(e.dimension).siUnit,

@@ -15,8 +15,9 @@
 
 namespace coldtip::input {
 
-//! What a key's value is.
-enum class ValueKind { Quantity, Integer, String, Enum, Map, List };
+//! What a key's value is (Quantities: a list of quantities of one dimension, each in the
+//! entry's range).
+enum class ValueKind { Quantity, Integer, String, Enum, Map, List, Quantities };
 
 //! An allowed interval in SI units; each bound is included or left out, an infinite
 //! bound is no bound.
@@ -54,6 +55,14 @@ enum class Table {
     HeatExchanger,
     WallIsothermal, //!< heat-exchanger wall held at a temperature
     WallLumped,     //!< heat-exchanger wall as a lumped body under a load
+    ColdBody,       //!< a further body of the cold head
+    BodyLink,       //!< its conductive link
+    ColdLoad,       //!< the keys every cold-head load has (name, kind, on)
+    LoadConstant,
+    LoadSchedule,
+    LoadTable,
+    LoadRadiation,
+    LoadSupport,
     Regenerator,
     Housing,
     Tube,
@@ -69,6 +78,7 @@ enum class Table {
     Steady,
     Output,
     Initial,
+    Cooldown,
 };
 
 //! One declared key.

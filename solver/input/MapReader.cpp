@@ -189,22 +189,41 @@ void MapReader::failHere(std::string problem, std::string expected) const
     m_context.fail(m_mark, std::move(problem), std::move(expected));
 }
 
+double MapReader::convert(const KeyEntry& e, const Scalar& s) const
+{
+    Quantity q;
+    try {
+        q = UnitConverter::instance().parse(s.text, e.dimension);
+    } catch (const UnitError& error) {
+        m_context.fail(s.mark, error.what(), expectedQuantity(e.dimension));
+    }
+    if (!e.range.contains(q.value))
+        m_context.fail(s.mark, shown(s.text, q, e.dimension) + " is out of range",
+                       expectation(e));
+    return q.value;
+}
+
 std::optional<double> MapReader::optionalQuantity(std::string_view key) const
 {
     const KeyEntry& e = entry(key);
     const auto s = scalar(e);
     if (!s)
         return std::nullopt;
-    Quantity q;
-    try {
-        q = UnitConverter::instance().parse(s->text, e.dimension);
-    } catch (const UnitError& error) {
-        m_context.fail(s->mark, error.what(), expectedQuantity(e.dimension));
-    }
-    if (!e.range.contains(q.value))
-        m_context.fail(s->mark, shown(s->text, q, e.dimension) + " is out of range",
-                       expectation(e));
-    return q.value;
+    return convert(e, *s);
+}
+
+std::vector<double> MapReader::quantities(std::string_view key) const
+{
+    const KeyEntry& e = entry(key);
+    const Item* i = item(key);
+    if (i && i->value.IsScalar())
+        return {convert(e, {i->value.Scalar(), i->mark})};
+    std::vector<double> values;
+    for (const Element& element : list(key))
+        values.push_back(convert(
+            e, {scalarText(element.node, element.mark, m_context, expectation(e)),
+                element.mark}));
+    return values;
 }
 
 std::optional<int> MapReader::optionalInteger(std::string_view key) const

@@ -69,6 +69,8 @@ public:
     std::optional<std::string> optionalText(std::string_view key) const;
     std::string choice(std::string_view key) const;
     std::optional<std::string> optionalChoice(std::string_view key) const;
+    //! A list of quantities in SI (a single value reads as a list of one; absent: empty).
+    std::vector<double> quantities(std::string_view key) const;
 
     //! The map under `key` read against its entry's tables (or `tables`); an empty map at
     //! this map's place if it is absent and not required.
@@ -104,6 +106,8 @@ private:
     //! value is not a scalar or a required key is absent.
     std::optional<Scalar> scalar(const KeyEntry& entry) const;
     [[noreturn]] void missing(const KeyEntry& entry, std::string_view why) const;
+    //! A scalar of `entry` converted to SI and checked against its range.
+    double convert(const KeyEntry& entry, const Scalar& s) const;
 
     const ReadContext& m_context;
     SourceMark m_mark;

@@ -28,6 +28,7 @@ constexpr DimensionRow kDimensions[nDimensions] = {
     {{"power", "a", "W", "2 W"}, "W"},
     {{"inverse length", "an", "1/m", "400 in^-1"}, "m^-1"},
     {{"heat-transfer coefficient", "a", "W/(m^2 K)", "50 W/(m^2 K)"}, "W/(m^2 K)"},
+    {{"thermal conductance", "a", "W/K", "2 W/K"}, "W/K"},
     {{"number", "a", "", "0.5"}, "1"},
 };
 

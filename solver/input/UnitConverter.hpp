@@ -31,6 +31,7 @@ enum class Dimension {
     Power,         //!< [W]
     InverseLength, //!< [1/m] screen mesh number
     HeatTransferCoefficient, //!< [W/(m^2 K)]
+    ThermalConductance,      //!< [W/K]
     Dimensionless,           //!< [-]
 };
 

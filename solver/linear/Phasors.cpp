@@ -83,6 +83,25 @@ int outletFace(const Network& net, const ComponentSlice& s)
     return -1;
 }
 
+//! The face a quarter of the neighbouring component's cells beyond junction face f,
+//! downstream (`down`) or upstream; f itself if the neighbour is a lumped volume.
+int awayFrom(const Network& net, int f, bool down)
+{
+    const int cell = down ? net.faces()[f].to : net.faces()[f].from;
+    const ComponentSlice& s = net.components()[net.cells()[cell].component];
+    const int steps = (s.last_cell - s.first_cell + 1) / 4;
+    int face = f;
+    for (int k = 0; k < steps; ++k) {
+        const int from = down ? net.faces()[face].to : net.faces()[face].from;
+        int next = -1;
+        for (std::size_t g = 0; g < net.faces().size(); ++g)
+            if ((down ? net.faces()[g].from : net.faces()[g].to) == from) next = static_cast<int>(g);
+        if (next < 0) break;
+        face = next;
+    }
+    return face;
+}
+
 } // namespace
 
 SummaryRoles summaryRoles(const Machine& machine)
@@ -173,11 +192,14 @@ MachinePhasors machinePhasors(const Machine& machine, const FirstHarmonics& h)
     summarizePorts(machine, out);
     const int cold = machine.coldComponent();
     if (cold >= 0) {
+        // A quarter of the neighbour's length away from the exchanger: the discrete
+        // temperature oscillation next to the kink of the mean profile at a junction swings
+        // from face to face and settles within a few cells.
         const ComponentSlice& s = slices[cold];
         const int fi = inletFace(net, s), fo = outletFace(net, s);
         double in = 0.0, gone = 0.0;
-        if (fi >= 0) in = facePort(net, h, fi, net.faces()[fi].from).enthalpy_flow;
-        if (fo >= 0) gone = facePort(net, h, fo, net.faces()[fo].to).enthalpy_flow;
+        if (fi >= 0) in = facePort(net, h, awayFrom(net, fi, false)).enthalpy_flow;
+        if (fo >= 0) gone = facePort(net, h, awayFrom(net, fo, true)).enthalpy_flow;
         out.summary.gross_cooling_W = gone - in;
     }
     return out;

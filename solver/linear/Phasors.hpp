@@ -67,11 +67,11 @@ struct FirstHarmonics {
 };
 
 //! Port phasors of every component (network slices, links included) and the summary; the
-//! enthalpy flow at a port is the second-order c_p/2 Re[mdot1 conj(T1)] with T1 the mean of
-//! the two cells beside it; the cooling estimate is the difference across the cold
-//! exchanger with T1 taken on the far side of each port (the gas that crosses it: zero
-//! oscillation at an ideal regenerator's end, adiabatic in the pulse tube; physics
-//! reference §7.1-7.2).
+//! enthalpy flow at a face is the second-order c_p/2 Re[mdot1 conj(T1)] with T1 the mean of
+//! the two cells beside it. The gross cooling estimate is the difference of that enthalpy
+//! flow across the cold exchanger, taken a quarter of each neighbour's length away from it
+//! (in an adiabatic pulse tube it equals the acoustic power there, zero at an ideal
+//! regenerator's end; physics reference §7.1-7.2).
 MachinePhasors machinePhasors(const Machine& machine, const FirstHarmonics& h);
 
 //! Component index (network slice) of the roles the summary names, -1 if absent.

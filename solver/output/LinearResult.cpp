@@ -27,6 +27,19 @@ nlohmann::json summaryJson(const PhasorSummary& s)
     return j;
 }
 
+//! `name` and `kind` datasets under `group` for a list of things that have both.
+template <class Named>
+void writeNames(Hdf5Writer& w, const std::string& group, const std::vector<Named>& items)
+{
+    std::vector<std::string> names, kinds;
+    for (const Named& c : items) {
+        names.push_back(c.name);
+        kinds.push_back(c.kind);
+    }
+    w.writeStrings(group + "/name", names);
+    w.writeStrings(group + "/kind", kinds);
+}
+
 //! A finite number or null (JSON has no infinity: a closed end's impedance).
 nlohmann::json finite(double v) { return std::isfinite(v) ? nlohmann::json(v) : nlohmann::json(); }
 
@@ -143,18 +156,18 @@ void writeCaseAttributes(Hdf5Writer& w, const Machine& machine, const RunInfo& i
     w.attribute("/case", "name", d.name);
     w.attribute("/case", "tool_version", std::string("coldtip ") + COLDTIP_VERSION);
     w.attribute("/case", "command_line", info.command_line);
+    // What a reader of any coldtip file expects (postprocess/coldtip_result.py): the case's
+    // name and frequency in /summary and the components in /grid.
+    w.attribute("/summary", "case", d.name);
+    w.attribute("/summary", "status", std::string("frequency-domain"));
+    w.attribute("/summary", "frequency_Hz", d.frequency);
+    writeNames(w, "/grid/components", machine.network().components());
 }
 
 void writePhasors(Hdf5Writer& w, const std::string& group, const MachinePhasors& m)
 {
-    std::vector<std::string> names, kinds;
-    for (const auto& c : m.components) {
-        names.push_back(c.name);
-        kinds.push_back(c.kind);
-    }
     const std::string g = group + "/components";
-    w.writeStrings(g + "/name", names);
-    w.writeStrings(g + "/kind", kinds);
+    writeNames(w, g, m.components);
     for (int side = 0; side < 2; ++side) {
         const std::string prefix = side == 0 ? "" : "outlet_";
         std::vector<double> pa, pp, ma, mp, ua, up, fp, ac, en;

@@ -25,7 +25,8 @@ nlohmann::json toJson(const MachinePhasors& phasors);
 nlohmann::json toJson(const LumpedModel& lumped);
 nlohmann::json toJson(const Comparison& comparison);
 
-//! /case attributes (case text, tool version, command line) of a frequency-domain file.
+//! /case attributes (case text, tool version, command line) of a frequency-domain file,
+//! with /summary (case, status, frequency_Hz) and /grid/components as every coldtip file.
 void writeCaseAttributes(Hdf5Writer& w, const Machine& machine, const RunInfo& info);
 //! Port phasors of every component under `group`/components and the summary attributes.
 void writePhasors(Hdf5Writer& w, const std::string& group, const MachinePhasors& phasors);

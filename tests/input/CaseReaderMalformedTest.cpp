@@ -188,7 +188,7 @@ const std::vector<Malformed> kMalformed = {
      {"'mass' is a key of the lumped-body form, but 'temperature' (line 36) makes the "
       "wall isothermal",
       "; expected either {temperature} (isothermal) or {material, mass, load, "
-      "initial_temperature} (lumped body)"}},
+      "initial_temperature, bodies, loads} (lumped body)"}},
     {"wall of neither form",
      "wall: {temperature: 85 K}", "wall: {}",
      36, 11, "components[3].wall",

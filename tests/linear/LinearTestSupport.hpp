@@ -30,6 +30,8 @@ struct DuctRig {
     double amplitude = 1e-5;     //!< [m]
     int cells = 40;
     double relative_tolerance = 1e-9;
+    bool isothermal_wall = true; //!< false: an adiabatic duct
+
 
     std::string caseText() const
     {
@@ -39,13 +41,13 @@ struct DuctRig {
             "frequency: {} Hz\n"
             "drive: {{kind: piston, bore: 10 mm, amplitude: {} m, dead_volume: {} m^3}}\n"
             "components:\n"
-            "  - {{name: duct, kind: duct, length: {} m, diameter: {} m, cells: {},\n"
-            "     wall: {{temperature: 300 K}}}}\n"
+            "  - {{name: duct, kind: duct, length: {} m, diameter: {} m, cells: {}{}}}\n"
             "  - {{name: buffer, kind: volume, volume: {} m^3}}\n"
             "solver: {{relative_tolerance: {}, steady: {{method: accelerated, "
             "heat_residual: 1e-6, temperature_tolerance: 1e-6 K}}}}\n"
             "output: {{samples_per_cycle: 64}}\n",
-            pressure, frequency, amplitude, buffer, length, 2.0 * radius, cells, buffer,
+            pressure, frequency, amplitude, buffer, length, 2.0 * radius, cells,
+            isothermal_wall ? ", wall: {temperature: 300 K}" : "", buffer,
             relative_tolerance);
     }
     CaseDescription description() const { return input::parseCaseText(caseText(), "duct-rig.yaml"); }

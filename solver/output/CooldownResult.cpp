@@ -1,0 +1,194 @@
+#include "solver/output/CooldownResult.hpp"
+
+#include <H5Cpp.h>
+#include <cmath>
+#include <filesystem>
+#include <fmt/format.h>
+
+#include "solver/output/Hdf5File.hpp"
+
+namespace coldtip {
+
+namespace {
+
+nlohmann::json finite(double v) { return std::isfinite(v) ? nlohmann::json(v) : nlohmann::json(); }
+
+//! The relative mismatch of the energy accounting: integral of the net cooling against the
+//! bodies' enthalpy change.
+double energyMismatch(const CooldownOutcome& out)
+{
+    return out.body_energy_change != 0.0
+               ? (out.net_cooling_integral - out.body_energy_change) / out.body_energy_change
+               : 0.0;
+}
+
+// Datasets and attributes into an existing file, in the layout Hdf5Writer makes.
+class Appender {
+public:
+    explicit Appender(const std::string& path)
+        : m_file(path, H5F_ACC_RDWR), m_group(m_file.createGroup("/cooldown"))
+    {
+    }
+    void write(const std::string& name, const std::vector<double>& v, std::size_t cols,
+               const std::string& units)
+    {
+        const hsize_t dims[2] = {cols > 0 ? v.size() / cols : 0, cols};
+        H5::DataSet ds = m_group.createDataSet(name, H5::PredType::NATIVE_DOUBLE,
+                                               H5::DataSpace(cols == 1 ? 1 : 2, dims));
+        if (!v.empty()) ds.write(v.data(), H5::PredType::NATIVE_DOUBLE);
+        H5::StrType st(H5::PredType::C_S1, units.size());
+        ds.createAttribute("units", st, H5::DataSpace(H5S_SCALAR)).write(st, units);
+    }
+    void strings(const std::string& name, const std::vector<std::string>& values)
+    {
+        std::vector<const char*> p;
+        for (const auto& s : values) p.push_back(s.c_str());
+        const hsize_t dims[1] = {values.size()};
+        H5::StrType st(H5::PredType::C_S1, H5T_VARIABLE);
+        H5::DataSet ds = m_group.createDataSet(name, st, H5::DataSpace(1, dims));
+        if (!p.empty()) ds.write(p.data(), st);
+    }
+    void attribute(const std::string& name, double v)
+    {
+        m_group.createAttribute(name, H5::PredType::NATIVE_DOUBLE, H5::DataSpace(H5S_SCALAR))
+            .write(H5::PredType::NATIVE_DOUBLE, &v);
+    }
+    void attribute(const std::string& name, const std::string& v)
+    {
+        const std::string s = v.empty() ? " " : v;
+        H5::StrType st(H5::PredType::C_S1, s.size());
+        m_group.createAttribute(name, st, H5::DataSpace(H5S_SCALAR)).write(st, s);
+    }
+
+private:
+    H5::H5File m_file;
+    H5::Group m_group;
+};
+
+std::string unitsOf(const std::string& key)
+{
+    for (const auto& [suffix, unit] :
+         std::vector<std::pair<std::string, std::string>>{{"_K", "K"}, {"_W", "W"}, {"_J", "J"},
+                                                          {"_s", "s"}})
+        if (key.ends_with(suffix)) return unit;
+    return "1";
+}
+
+} // namespace
+
+std::vector<SummaryValue> cooldownValues(const CooldownOutcome& out)
+{
+    const CooldownRow* end = out.history.empty() ? nullptr : &out.history.back();
+    return {
+        {"end_time_s", out.end_time},
+        {"final_cold_temperature_K", end ? end->cold_temperature : 0.0},
+        {"final_net_cooling_W", end ? end->net_cooling : 0.0},
+        {"final_cooling_power_W", end ? end->cooling : 0.0},
+        {"final_pv_power_W", end ? end->pv_power : 0.0},
+        {"distance_estimate_K", out.distance_estimate},
+        {"steady_checked", out.steady_checked ? 1.0 : 0.0},
+        {"steady_cold_temperature_K", out.steady_checked ? out.steady_cold_temperature : 0.0},
+        {"steady_difference_K",
+         out.steady_checked && end ? end->cold_temperature - out.steady_cold_temperature : 0.0},
+        {"net_cooling_integral_J", out.net_cooling_integral},
+        {"body_energy_change_J", out.body_energy_change},
+        {"energy_mismatch", energyMismatch(out)},
+        {"wall_time_s", out.wall_time_s},
+        {"steady_wall_time_s", out.steady_wall_time_s},
+        {"cycles", static_cast<double>(out.cycles)},
+        {"steps", static_cast<double>(out.work.steps)},
+        {"macro_steps", static_cast<double>(out.macro_steps)},
+        {"macro_error_test_failures", static_cast<double>(out.error_test_failures)},
+        {"heat_flow_evaluations", static_cast<double>(out.heat_flow_evaluations)},
+        {"jacobian_evaluations", static_cast<double>(out.jacobian_evaluations)},
+        {"largest_settle_change", out.largest_settle_change},
+        {"unsettled_evaluations", static_cast<double>(out.unsettled_evaluations)},
+        {"largest_cold_offset_K", out.largest_cold_offset},
+    };
+}
+
+nlohmann::json cooldownJson(const Machine& machine, const CooldownOutcome& out)
+{
+    nlohmann::json j;
+    j["case"] = machine.description().name;
+    j["method"] = out.method;
+    j["status"] = out.status;
+    if (!out.failure.empty()) j["failure"] = out.failure;
+    for (const SummaryValue& v : cooldownValues(out)) j[v.key] = finite(v.value);
+    j["report"] = nlohmann::json::array();
+    for (const CooldownReport& r : out.reports)
+        j["report"].push_back({{"temperature_K", r.temperature}, {"time_s", finite(r.time)}});
+    nlohmann::json loads = nlohmann::json::object();
+    if (!out.history.empty())
+        for (std::size_t k = 0; k < out.load_names.size(); ++k)
+            loads[out.load_names[k]] = out.history.back().loads[k];
+    j["final_loads_W"] = loads;
+    nlohmann::json bodies = nlohmann::json::object();
+    if (!out.history.empty())
+        for (std::size_t k = 0; k < out.body_names.size(); ++k)
+            bodies[out.body_names[k]] = out.history.back().body_temperatures[k];
+    j["final_body_temperatures_K"] = bodies;
+    return j;
+}
+
+void writeCooldownResult(const std::string& path, const Machine& machine,
+                         const CooldownOutcome& out, const RunInfo& info)
+{
+    // The run result first, under a temporary name; /cooldown added; then moved into place.
+    const std::string staging = path + ".cooldown";
+    const SteadyOutcome& last = out.final_cycle;
+    RunSummary summary = summarize(machine, last, last.converged ? "converged" : "not-converged",
+                                   last.wall_time_s);
+    summary.result_file = path;
+    writeRunResult(staging, machine, last, summary, info);
+    try {
+        H5::Exception::dontPrint();
+        Appender a(staging);
+        std::vector<double> t, Tc, Tb, gross, cooling, net, pv, load, integral;
+        for (const CooldownRow& r : out.history) {
+            t.push_back(r.time);
+            Tc.push_back(r.cold_temperature);
+            Tb.insert(Tb.end(), r.body_temperatures.begin(), r.body_temperatures.end());
+            gross.push_back(r.gross_cooling);
+            cooling.push_back(r.cooling);
+            net.push_back(r.net_cooling);
+            pv.push_back(r.pv_power);
+            load.insert(load.end(), r.loads.begin(), r.loads.end());
+            integral.push_back(r.net_cooling_integral);
+        }
+        a.write("time", t, 1, "s");
+        a.write("cold_temperature", Tc, 1, "K");
+        a.write("body_temperature", Tb, out.body_names.size(), "K");
+        a.strings("body_name", out.body_names);
+        a.write("gross_cooling_power", gross, 1, "W");
+        a.write("cooling_power", cooling, 1, "W");
+        a.write("net_cooling_power", net, 1, "W");
+        a.write("pv_power", pv, 1, "W");
+        a.write("load", load, std::max<std::size_t>(1, out.load_names.size()), "W");
+        a.strings("load_name", out.load_names);
+        a.write("net_cooling_integral", integral, 1, "J");
+        std::vector<double> report_T, report_t;
+        for (const CooldownReport& r : out.reports) {
+            report_T.push_back(r.temperature);
+            report_t.push_back(r.time);
+        }
+        a.write("report_temperature", report_T, 1, "K");
+        a.write("report_time", report_t, 1, "s");
+        a.attribute("method", out.method);
+        a.attribute("status", out.status);
+        a.attribute("failure", out.failure);
+        std::string units;
+        for (const SummaryValue& v : cooldownValues(out)) {
+            a.attribute(v.key, v.value);
+            units += v.key + ":" + unitsOf(v.key) + ";";
+        }
+        a.attribute("units", units);
+    } catch (const H5::Exception& e) {
+        std::filesystem::remove(staging);
+        throw std::runtime_error(fmt::format("{}: cannot write /cooldown: {}", path,
+                                             e.getDetailMsg()));
+    }
+    std::filesystem::rename(staging, path);
+}
+
+} // namespace coldtip
