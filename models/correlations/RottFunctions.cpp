@@ -156,20 +156,33 @@ public:
             m_slope.push_back(f.slope * x * m_h); // d/du times the cell width
         }
     }
-    Slope operator()(double x) const
+    //! Where x falls: below the table, above it, or in cell i at fraction t.
+    struct Place {
+        enum class Where { Below, Inside, Above } where;
+        int i = 0;
+        double t = 0.0;
+    };
+    Place locate(double x) const
+    {
+        if (!(x > 0.0)) return {Place::Where::Below};
+        const double u = std::log(x);
+        if (u <= m_u0) return {Place::Where::Below};
+        if (u >= m_u1) return {Place::Where::Above};
+        const double q = (u - m_u0) / m_h;
+        const int i = std::min(static_cast<int>(q), static_cast<int>(m_value.size()) - 2);
+        return {Place::Where::Inside, i, q - i};
+    }
+    Slope at(const Place& p, double x) const
     {
         // Below the table the laws sit at their x -> 0 limits to within 1e-9 (their first
         // correction is of order x^4), where the exact forms lose digits to cancellation.
-        if (!(x > 0.0)) return {m_value.front(), 0.0};
-        const double u = std::log(x);
-        if (u <= m_u0) return {m_value.front(), 0.0};
-        if (u >= m_u1) return m_law(x);
-        const double q = (u - m_u0) / m_h;
-        const int i = std::min(static_cast<int>(q), static_cast<int>(m_value.size()) - 2);
-        const double t = q - i;
+        if (p.where == Place::Where::Below) return {m_value.front(), 0.0};
+        if (p.where == Place::Where::Above) return m_law(x);
+        const int i = p.i;
         const Cubic c = Cubic::hermite(m_value[i], m_value[i + 1], m_slope[i], m_slope[i + 1]);
-        return {c.value(t), c.slope(t) / (m_h * x)};
+        return {c.value(p.t), c.slope(p.t) / (m_h * x)};
     }
+    Slope operator()(double x) const { return at(locate(x), x); }
 
 private:
     Slope (*m_law)(double);
@@ -182,16 +195,31 @@ constexpr int kNodesPerDecade = 64;
 
 } // namespace
 
-Slope womersleyResistanceFactor(double x)
+namespace {
+
+const LogTable& resistanceTable()
 {
     static const LogTable table(exactResistanceFactor, kTableMin, kTableMax, kNodesPerDecade);
-    return table(x);
+    return table;
 }
 
-Slope womersleyInertanceFactor(double x)
+const LogTable& inertanceTable()
 {
     static const LogTable table(exactInertanceFactor, kTableMin, kTableMax, kNodesPerDecade);
-    return table(x);
+    return table;
+}
+
+} // namespace
+
+Slope womersleyResistanceFactor(double x) { return resistanceTable()(x); }
+
+Slope womersleyInertanceFactor(double x) { return inertanceTable()(x); }
+
+WomersleyFactors womersleyFactors(double x)
+{
+    // Both tables share their grid, so one logarithm places x in both.
+    const LogTable::Place place = resistanceTable().locate(x);
+    return {resistanceTable().at(place, x), inertanceTable().at(place, x)};
 }
 
 Slope rottNusselt(double x)

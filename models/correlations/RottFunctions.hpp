@@ -47,6 +47,12 @@ Slope womersleyResistanceFactor(double x);
 //!   L'/(rho/A) = Re[ 1/(1 - f_nu) ]   (4/3 as x -> 0, 1 as x -> infinity;
 //! physics reference §6.5: 1.25396 at alpha = 5).
 Slope womersleyInertanceFactor(double x);
+//! Both of Womersley's factors at one x = r0/delta_nu, sharing one table lookup.
+struct WomersleyFactors {
+    Slope resistance;
+    Slope inertance;
+};
+WomersleyFactors womersleyFactors(double x);
 
 //! Nusselt number on the diameter, Nu = h D/k [-], of a real film coefficient whose
 //! lumped gas-temperature response comes closest (in the complex plane) to Rott's thermal

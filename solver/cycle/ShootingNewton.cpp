@@ -218,6 +218,8 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             if (plainCycle()) return out;
         const int k = shooting.cycles_per_map;
         newton_phase = true;
+        double forcing = shooting.max_forcing;
+        double previous_residual = 0.0;
         for (int it = 1; it <= shooting.max_newton; ++it) {
             const long n0 = runner.periodIndex();
             const std::vector<double> y_start = out.state;
@@ -229,6 +231,13 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             const Vec g = toEigen(slow.extract(y_end));
             const Vec F = g - x;
             report.newton_residual.push_back(rms(F));
+            const double residual = F.norm();
+            if (previous_residual > 0.0) {
+                // (Eisenstat and Walker's safeguard 0.9 eta_k-1^2 never exceeds the cap.)
+                forcing = std::clamp(0.9 * std::pow(residual / previous_residual, 2),
+                                     shooting.krylov_tolerance, shooting.max_forcing);
+            }
+            previous_residual = residual;
 
             // Directional derivative of the k-period map from the same start state, carried
             // as a forward sensitivity along a re-integration of the base trajectory.
@@ -242,7 +251,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
                 runner.session().stopSensitivity();
                 return v - Mv;
             };
-            GmresResult sol = gmres(apply, F, shooting.max_krylov, shooting.krylov_tolerance);
+            GmresResult sol = gmres(apply, F, shooting.max_krylov, forcing);
             report.krylov_iterations.push_back(sol.iterations);
             report.floquet.push_back(multipliersOf(sol.hessenberg, k, 6));
             report.newton_iterations = it;

@@ -134,10 +134,14 @@ TubeMomentumLaw<S> oscillatingTubeMomentum(const PassageFlow<S>& f, const GasSta
     const S delta = penetrationDepth(g.mu / g.rho, osc.omega);
     const S x = 0.5 * dh / delta;
     const S w = quasiSteadyWeight(f, delta, dh, osc);
+    const models::WomersleyFactors laminar = models::womersleyFactors(valueOf(x));
     const S laminar_fRe = models::OpenTube::kLaminarFrictionTimesReynolds *
-                          chain(models::womersleyResistanceFactor(valueOf(x)), x);
-    const S laminar_L = chain(models::womersleyInertanceFactor(valueOf(x)), x);
+                          chain(laminar.resistance, x);
+    const S laminar_L = chain(laminar.inertance, x);
     TubeMomentumLaw<S> r;
+    // Below the transition band w and its slope are exactly zero: the quasi-steady law
+    // (a logarithm and powers) is not needed for most of the cycle.
+    if (valueOf(w) == 0.0) return {laminar_fRe, laminar_L};
     r.fRe = laminar_fRe + w * (steadyFrictionTimesReynolds(f, passage) - laminar_fRe);
     r.inertance_factor = laminar_L + w * (1.0 - laminar_L);
     return r;
@@ -175,6 +179,7 @@ S oscillatingTubeNusselt(const PassageFlow<S>& f, const GasState<S>& g,
     const S x = 0.5 * dh / delta_kappa;
     const S w = quasiSteadyWeight(f, delta_nu, dh, osc);
     const S laminar = chain(models::rottNusselt(valueOf(x)), x);
+    if (valueOf(w) == 0.0) return laminar;
     return laminar + w * (nusselt(passage, f.Re, f.Pr) - laminar);
 }
 
