@@ -220,6 +220,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
         newton_phase = true;
         double forcing = shooting.max_forcing;
         double previous_residual = 0.0;
+        bool tighten = false;
         for (int it = 1; it <= shooting.max_newton; ++it) {
             const long n0 = runner.periodIndex();
             const std::vector<double> y_start = out.state;
@@ -233,9 +234,14 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             report.newton_residual.push_back(rms(F));
             const double residual = F.norm();
             if (previous_residual > 0.0) {
-                // (Eisenstat and Walker's safeguard 0.9 eta_k-1^2 never exceeds the cap.)
-                forcing = std::clamp(0.9 * std::pow(residual / previous_residual, 2),
-                                     shooting.krylov_tolerance, shooting.max_forcing);
+                // Eisenstat-Walker while the outer iteration converges well. Where it stalls
+                // (at the integrator's noise floor, or far from the fixed point) a loose
+                // solve gives a useless step: solve tightly instead.
+                const double ratio = residual / previous_residual;
+                forcing = ratio < 0.5 && !tighten
+                              ? std::clamp(0.9 * ratio * ratio, shooting.krylov_tolerance,
+                                           shooting.max_forcing)
+                              : shooting.krylov_tolerance;
             }
             previous_residual = residual;
 
@@ -261,8 +267,12 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             // point: with it below tolerance the last base cycle is the answer.
             out.metrics.distance_estimate = largest;
             out.history.back().metrics.distance_estimate = largest;
-            out.converged = steadyStateReached(out.metrics, options,
-                                               static_cast<long>(out.history.size()));
+            // A correction from a loose linear solve underestimates the distance along the
+            // slow modes by up to 1/(1 - mu): it may not declare convergence.
+            const bool reached = steadyStateReached(out.metrics, options,
+                                                    static_cast<long>(out.history.size()));
+            out.converged = reached && forcing <= shooting.trusted_forcing;
+            tighten = reached && !out.converged;
             if (out.converged) {
                 if (on_cycle && !on_cycle(out)) stop = true;
                 return out;

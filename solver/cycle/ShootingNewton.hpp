@@ -44,6 +44,8 @@ struct ShootingOptions {
     //! itself only gains a factor of ten.
     double krylov_tolerance = 1e-3;
     double max_forcing = 0.1;
+    //! Loosest linear solve whose Newton correction may declare the steady state reached.
+    double trusted_forcing = 1e-2;
     double max_step_K = 30.0;       //!< largest temperature change of one Newton step [K]
 };
 
