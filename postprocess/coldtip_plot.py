@@ -30,7 +30,7 @@ import numpy as np
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
 
 import plot_layout as layout  # noqa: E402
-from coldtip_result import NotAResult, Result, convert, known, toSi  # noqa: E402
+from coldtip_result import NotAResult, Result, convert, known, text, toSi  # noqa: E402
 from matplotlib.ticker import MaxNLocator  # noqa: E402
 
 
@@ -363,7 +363,10 @@ def cooldown(r, out):
     ax.set_xlabel(layout.unitLabel("time", tShown))
     ax.set_ylabel(layout.unitLabel("cold-end temperature", kUnit))
     ax.legend(loc="upper right", framealpha=0.9)
-    layout.title(fig, r, "cooldown of the cold end")
+    # the subtitle tells how the cooldown ended (the run summary is of the final cycle)
+    attrs = r.file["cooldown"].attrs
+    how = ", ".join(text(attrs[k]) for k in ("method", "status") if k in attrs)
+    fig.suptitle(f"{r.caseName()}: cooldown of the cold end" + (f"\n({how})" if how else ""))
     return layout.save(fig, os.path.join(out, "cooldown.png"))
 
 

@@ -96,7 +96,8 @@ class PlotsOfARealRun(unittest.TestCase, PngChecks):
         cls.result = os.path.join(cls.tmp, "run.h5")
         run = subprocess.run([exe, "run", case, "--max-cycles", "5", "-o", cls.result,
                               "--quiet"], capture_output=True, text=True, timeout=600)
-        if run.returncode != 0 or not os.path.isfile(cls.result):
+        # Five cycles are not the steady state: exit 2 (not converged) with a readable file.
+        if run.returncode not in (0, 2) or not os.path.isfile(cls.result):
             raise AssertionError(f"coldtip run failed ({run.returncode}): {run.stderr}")
         cls.out = os.path.join(cls.tmp, "plots")
         cls.proc = plot(cls.result, cls.out)
