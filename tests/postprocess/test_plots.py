@@ -154,8 +154,8 @@ class PlotsOfARealRun(unittest.TestCase, PngChecks):
 
 
 class LaterFeatures(unittest.TestCase, PngChecks):
-    """/linear/components and /cooldown are not written yet: the plots are tested on a
-    small invented file (a copy of the grid of a run is not needed for either)."""
+    """The phasor and cooldown plots, tested on a small invented file with /linear/components
+    and /cooldown (a run of either would cost minutes; the layout is the one they write)."""
 
     def setUp(self):
         self.tmp = tempfile.mkdtemp(prefix="coldtip-plots-later-")
