@@ -12,6 +12,15 @@
 namespace coldtip {
 
 namespace {
+
+//! The text of a SUNDIALS flag name, which CVodeGet*ReturnFlagName allocates with malloc
+//! and leaves to the caller to free (CVODES user guide, v6.4, "CVodeGetReturnFlagName").
+std::string flagName(char* name)
+{
+    std::string text = name ? name : "unknown flag";
+    std::free(name);
+    return text;
+}
 std::span<const double> viewOf(N_Vector v)
 {
     return {N_VGetArrayPointer(v), static_cast<std::size_t>(N_VGetLength(v))};
@@ -212,12 +221,13 @@ void CvodeSession::check(int flag, const char* call)
     sunrealtype t = m_t;
     if (m_cvode) CVodeGetCurrentTime(m_cvode.get(), &t);
     std::string what = fmt::format("{} failed with {} at t = {:.9g} s", call,
-                                   CVodeGetReturnFlagName(flag), t);
+                                   flagName(CVodeGetReturnFlagName(flag)), t);
     if (!m_last_message.empty()) what += ": " + m_last_message;
     if (flag == CV_LSETUP_FAIL || flag == CV_LSOLVE_FAIL) {
         long lsflag = 0;
         if (CVodeGetLastLinFlag(m_cvode.get(), &lsflag) == CV_SUCCESS)
-            what += fmt::format(" (linear solver: {})", CVodeGetLinReturnFlagName(lsflag));
+            what += fmt::format(" (linear solver: {})",
+                                flagName(CVodeGetLinReturnFlagName(lsflag)));
     }
     std::vector<std::string> worst;
     if (m_cvode && flag != CV_MEM_NULL) worst = worstStates(10);
