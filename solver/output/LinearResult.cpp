@@ -151,11 +151,7 @@ nlohmann::json toJson(const Comparison& c)
 void writeCaseAttributes(Hdf5Writer& w, const Machine& machine, const RunInfo& info)
 {
     const CaseDescription& d = machine.description();
-    w.attribute("/case", "text", d.source_text);
-    w.attribute("/case", "path", d.source_path);
-    w.attribute("/case", "name", d.name);
-    w.attribute("/case", "tool_version", std::string("coldtip ") + COLDTIP_VERSION);
-    w.attribute("/case", "command_line", info.command_line);
+    writeCaseText(w, machine, info);
     // What a reader of any coldtip file expects (postprocess/coldtip_result.py): the case's
     // name and frequency in /summary and the components in /grid.
     w.attribute("/summary", "case", d.name);

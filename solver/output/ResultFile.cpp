@@ -242,16 +242,22 @@ std::string unitsOf(const std::string& key)
 
 } // namespace
 
-void writeRunResult(const std::string& path, const Machine& machine, const SteadyOutcome& out,
-                    const RunSummary& summary, const RunInfo& info)
+void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info)
 {
-    Hdf5Writer w(path);
     const CaseDescription& d = machine.description();
     w.attribute("/case", "text", d.source_text);
     w.attribute("/case", "path", d.source_path);
     w.attribute("/case", "name", d.name);
     w.attribute("/case", "tool_version", std::string("coldtip ") + COLDTIP_VERSION);
     w.attribute("/case", "command_line", info.command_line);
+}
+
+void writeRunResult(const std::string& path, const Machine& machine, const SteadyOutcome& out,
+                    const RunSummary& summary, const RunInfo& info)
+{
+    Hdf5Writer w(path);
+    const CaseDescription& d = machine.description();
+    writeCaseText(w, machine, info);
     writeGrid(w, machine);
     if (!out.samples.time.empty()) writeCycle(w, machine, out.samples);
     writeHistory(w, machine, out.history);

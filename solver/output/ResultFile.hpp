@@ -8,12 +8,16 @@
 #include <string>
 
 #include "solver/output/RunSummary.hpp"
+#include "solver/output/Hdf5File.hpp"
 
 namespace coldtip {
 
 struct RunInfo {
     std::string command_line;
 };
+
+//! /case: the case text and path, its name, the tool version and the command line.
+void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info);
 
 void writeRunResult(const std::string& path, const Machine& machine, const SteadyOutcome& outcome,
                     const RunSummary& summary, const RunInfo& info);
