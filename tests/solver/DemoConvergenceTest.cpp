@@ -62,7 +62,7 @@ TEST_CASE("converged demo closes its energy balance, conserves mass and stays be
 
 // The grid study is hidden from the default run ([.grid]; run it with
 // `coldtip_tests "[grid]"`, about 5 minutes): with the oscillating-flow heat transfer in the
-// pulse tube (DEVELOPERS.md) doubling 50 -> 100 cells changes the cooling power by 3.0 %,
+// pulse tube (DEVELOPERS.md) doubling 50 -> 100 cells changes the cooling power by 2.9 %,
 // above the 2 % asked for; see README "What is checked".
 TEST_CASE("demo cooling power is grid-converged within 2 % (regenerator and pulse-tube "
           "cells doubled)",
