@@ -7,9 +7,10 @@
 //!
 //!   dT/dt += -(T - T_hold) / tau                                                  [K/s]
 //!
-//! with tau a few periods: the node's drift over the cycle is held back while its swing
+//! with tau tens of periods: the node's drift over the cycle is held back while its swing
 //! within the cycle (period T_p << tau) is kept to a relative amplitude of
-//! 1/sqrt(1 + (T_p/(2 pi tau))^2) and a phase lead of T_p/(2 pi tau) (first-order response).
+//! 1/sqrt(1 + (T_p/(2 pi tau))^2) and a phase lead of T_p/(2 pi tau) (first-order response);
+//! that lead biases the regenerator's loss, hence tens of periods, not a few.
 //! The heat the hold removes, C(T) (T - T_hold)/tau, is integrated in its own channel, so
 //! the node's physical net heat over a cycle is exactly
 //!   Q = [U(T_end) - U(T_start)] / T_p + <C (T - T_hold)/tau>.

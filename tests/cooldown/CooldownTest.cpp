@@ -94,7 +94,7 @@ TEST_CASE("accelerated cooldown reaches 280, 260 and 245 K within 2 % of the pla
     checkEnergy(fast);
 }
 
-TEST_CASE("accelerated cooldown settles within 0.5 K of the steady solver's cold "
+TEST_CASE("accelerated cooldown settles within 0.1 K of the steady solver's cold "
           "temperature, net cooling integral equal to the NIST enthalpy drop within 1 %",
           "[cooldown]")
 {
@@ -108,10 +108,9 @@ TEST_CASE("accelerated cooldown settles within 0.5 K of the steady solver's cold
     INFO(fmt::format("slow integration settled at {:.3f} K at {:.1f} s, steady solver "
                      "{:.3f} K; wall {:.1f} s",
                      T_slow, fast.end_time, T_steady, fast.wall_time_s));
-    // The settle test (Newton step of the slow equation below 0.05 K) stops about 0.4 K
-    // above the steady state on this case: the noise of the averaged heat flows near zero
-    // net cooling; the steady solver takes the rest.
-    CHECK(std::abs(T_slow - T_steady) <= 0.5);
+    // Issue 5 asks for 0.1 K. With the hold's time constant at 5 periods the slow equation
+    // settled 0.45 K above the steady state here (CooldownAveraged.cpp, kHoldPeriods).
+    CHECK(std::abs(T_slow - T_steady) <= 0.1);
     checkEnergy(fast);
 }
 
