@@ -1,5 +1,6 @@
 #include "solver/cycle/Cooldown.hpp"
 
+#include <algorithm>
 #include <chrono>
 #include <cmath>
 #include <limits>
@@ -141,17 +142,13 @@ CooldownOutcome plainCooldown(Machine& machine, const CooldownOptions& o,
 //! The steady-state check integrates at a relative tolerance of at most 1e-6: its test asks
 //! for a cycle heat residual of every solid below 1e-3 of the cooling power, and at 1e-5 the
 //! integrator's cycle-to-cycle scatter alone keeps a cold block's residual near 2e-3 (the
-//! loaded demo, 10,000 cycles watched). The absolute tolerances scale with it.
+//! loaded demo, 10,000 cycles watched).
 IntegratorOptions steadyCheckOptions(const Machine& machine)
 {
     constexpr double kSteadyCheckTolerance = 1e-6;
-    IntegratorOptions o = CycleRunner::optionsFor(machine);
-    if (o.relative_tolerance > kSteadyCheckTolerance) {
-        const double scale = kSteadyCheckTolerance / o.relative_tolerance;
-        for (double& a : o.absolute_tolerances) a *= scale;
-        o.relative_tolerance = kSteadyCheckTolerance;
-    }
-    return o;
+    return CycleRunner::optionsFor(
+        machine,
+        std::min(machine.description().solver.relative_tolerance, kSteadyCheckTolerance));
 }
 
 } // namespace

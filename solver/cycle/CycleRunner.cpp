@@ -6,12 +6,17 @@ namespace coldtip {
 
 IntegratorOptions CycleRunner::optionsFor(const Machine& machine)
 {
+    return optionsFor(machine, machine.description().solver.relative_tolerance);
+}
+
+IntegratorOptions CycleRunner::optionsFor(const Machine& machine, double relative_tolerance)
+{
     const SolverSpec& s = machine.description().solver;
     IntegratorOptions o;
-    o.relative_tolerance = s.relative_tolerance;
+    o.relative_tolerance = relative_tolerance;
     o.max_order = s.max_order;
     o.absolute_tolerances = machine.network().absoluteTolerances(
-        machine.chargeMass(), s.relative_tolerance, machine.massFlowScale(),
+        machine.chargeMass(), relative_tolerance, machine.massFlowScale(),
         s.absolute_tolerance_scale);
     return o;
 }

@@ -37,6 +37,8 @@ public:
 
     //! Options from the case: tolerances with absolute scales from the machine.
     static IntegratorOptions optionsFor(const Machine& machine);
+    //! The same at a given relative tolerance (absolute tolerances follow it).
+    static IntegratorOptions optionsFor(const Machine& machine, double relative_tolerance);
 
     //! (Re)start at period number `period_index` (t = index T) from state y.
     void start(long period_index, std::span<const double> y);
