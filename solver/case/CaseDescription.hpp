@@ -197,6 +197,8 @@ struct SteadySpec {
 struct SolverSpec {
     double relative_tolerance = 1e-6;
     double absolute_tolerance_scale = 1.0; //!< multiplies the built-in absolute tolerances
+    //! Multiplies, on top, the mass flows' absolute tolerance (rtol x drive mass-flow amplitude).
+    double mass_flow_tolerance_scale = 1.0;
     int max_order = 2;
     long max_steps_per_cycle = 100000;
     SteadySpec steady;

@@ -78,7 +78,7 @@ double secondsSince(Clock::time_point t0)
 }
 
 //! Every cycle integrated from y0. Settled when the geometric extrapolation of the cold
-//! end's change per cycle (DistanceEstimate) is below the tolerance.
+//! end's drift per cycle (DistanceEstimate) is below the tolerance.
 CooldownOutcome plainCooldown(Machine& machine, const CooldownOptions& o,
                               const std::vector<double>& y0, const CooldownCallback& on_row)
 {
@@ -103,8 +103,7 @@ CooldownOutcome plainCooldown(Machine& machine, const CooldownOptions& o,
             energy += row.net_cooling * (r.t_end - r.t_start);
             row.net_cooling_integral = energy;
             clock.add(r.t_start, r.start_state[cold], r.t_end, r.end_state[cold]);
-            out.distance_estimate =
-                distance.add(std::abs(r.end_state[cold] - r.start_state[cold]));
+            out.distance_estimate = distance.add(std::span(&r.end_state[cold], 1));
             out.state = r.end_state;
             out.period_index = runner.periodIndex();
             out.end_time = r.t_end;

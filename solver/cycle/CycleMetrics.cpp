@@ -21,6 +21,16 @@ double boundaryTemperature(const Machine& machine, std::span<const double> y, in
     return y[machine.network().solids()[b.solid_node].offset];
 }
 
+std::vector<double> nodeTemperatures(const Network& network, std::span<const double> y)
+{
+    std::vector<double> T;
+    T.reserve(network.solids().size() + network.cells().size());
+    for (const SolidNode& s : network.solids()) T.push_back(y[s.offset]);
+    const double cv = network.gas().cv;
+    for (const GasCell& c : network.cells()) T.push_back(y[c.offset + 1] / (y[c.offset] * cv));
+    return T;
+}
+
 CycleMetrics cycleMetrics(const Machine& machine, const CycleRecord& r)
 {
     using K = QuadratureChannel::Kind;
@@ -57,15 +67,11 @@ CycleMetrics cycleMetrics(const Machine& machine, const CycleRecord& r)
             m.heat_residual = rel;
             m.worst_solid = net.solids()[s].name;
         }
-        m.max_temperature_change =
-            std::max(m.max_temperature_change, std::abs(r.end_state[k] - r.start_state[k]));
     }
-    const double cv = net.gas().cv;
-    for (const GasCell& c : net.cells()) {
-        const double T0 = r.start_state[c.offset + 1] / (r.start_state[c.offset] * cv);
-        const double T1 = r.end_state[c.offset + 1] / (r.end_state[c.offset] * cv);
-        m.max_temperature_change = std::max(m.max_temperature_change, std::abs(T1 - T0));
-    }
+    const std::vector<double> T0 = nodeTemperatures(net, r.start_state);
+    const std::vector<double> T1 = nodeTemperatures(net, r.end_state);
+    for (std::size_t i = 0; i < T0.size(); ++i)
+        m.max_temperature_change = std::max(m.max_temperature_change, std::abs(T1[i] - T0[i]));
     m.cold_temperature = boundaryTemperature(machine, r.end_state, cold);
     m.reject_temperature = boundaryTemperature(machine, r.end_state, reject);
     if (m.pv_power != 0.0) m.cop = m.cooling_power / m.pv_power;

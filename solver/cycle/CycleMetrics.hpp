@@ -48,6 +48,10 @@ double boundaryHeat(const Machine& machine, const std::vector<double>& averages,
 //! Temperature of thermal boundary b at a state [K].
 double boundaryTemperature(const Machine& machine, std::span<const double> y, int boundary);
 
+//! Temperature of every solid node, then of every gas cell, at a state [K]: the nodes whose
+//! change from cycle to cycle measures the distance to the periodic steady state.
+std::vector<double> nodeTemperatures(const Network& network, std::span<const double> y);
+
 CycleMetrics cycleMetrics(const Machine& machine, const CycleRecord& record);
 
 } // namespace coldtip

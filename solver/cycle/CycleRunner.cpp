@@ -16,8 +16,8 @@ IntegratorOptions CycleRunner::optionsFor(const Machine& machine, double relativ
     o.relative_tolerance = relative_tolerance;
     o.max_order = s.max_order;
     o.absolute_tolerances = machine.network().absoluteTolerances(
-        machine.chargeMass(), relative_tolerance, machine.massFlowScale(),
-        s.absolute_tolerance_scale);
+        machine.chargeMass(), relative_tolerance,
+        machine.massFlowScale() * s.mass_flow_tolerance_scale, s.absolute_tolerance_scale);
     return o;
 }
 

@@ -1,8 +1,10 @@
 #include "solver/cycle/PeriodicSteadyState.hpp"
 
+#include <algorithm>
 #include <chrono>
 #include <cmath>
 #include <fmt/format.h>
+#include <utility>
 
 namespace coldtip {
 
@@ -35,7 +37,8 @@ bool appendCycle(SteadyOutcome& out, const Machine& machine, CycleRecord record,
     row.time = record.t_end;
     row.metrics = cycleMetrics(machine, record);
     row.metrics.distance_estimate =
-        distance ? distance->add(row.metrics.max_temperature_change) : HUGE_VAL;
+        distance ? distance->add(nodeTemperatures(machine.network(), record.end_state))
+                 : HUGE_VAL;
     row.work = record.work;
     row.boundary_enthalpy = boundaryEnthalpy(machine, record.averages);
     row.wall_time_s = wall_time_s;
@@ -74,19 +77,54 @@ std::string convergenceShortfall(const CycleMetrics& m, const SteadyOptions& o)
     return s;
 }
 
-double DistanceEstimate::add(double change)
+double DistanceEstimate::drift(std::size_t block) const
 {
-    m_changes.push_back(change);
-    // The decay ratio over the last half of the history: a slow mode (multiplier 0.9999)
-    // changes the ratio over ten cycles by less than the cycle-to-cycle noise, so a short
-    // span would report it as settled.
-    const std::size_t n = m_changes.size();
-    const std::size_t span = std::min<std::size_t>(n - 1, std::max<std::size_t>(10, n / 2));
-    if (span < 2 || change <= 0.0) return change <= 0.0 ? 0.0 : HUGE_VAL;
-    const double before = m_changes[n - 1 - span];
-    if (!(before > change)) return HUGE_VAL;
-    const double mu = std::pow(change / before, 1.0 / span);
-    return change * mu / (1.0 - mu);
+    const std::vector<double>& a = m_means[block - 1];
+    const std::vector<double>& b = m_means[block];
+    double largest = 0.0;
+    for (std::size_t i = 0; i < a.size(); ++i) largest = std::max(largest, std::abs(b[i] - a[i]));
+    return largest / static_cast<double>(m_block_cycles);
+}
+
+double DistanceEstimate::add(std::span<const double> temperatures)
+{
+    ++m_cycles;
+    if (m_sum.empty()) m_sum.assign(temperatures.size(), 0.0);
+    for (std::size_t i = 0; i < m_sum.size(); ++i) m_sum[i] += temperatures[i];
+    if (++m_in_block < m_block_cycles) return m_estimate;
+
+    for (double& v : m_sum) v /= static_cast<double>(m_block_cycles);
+    m_means.push_back(std::exchange(m_sum, std::vector<double>(m_sum.size(), 0.0)));
+    m_in_block = 0;
+    if (m_means.size() == kMaxBlocks) {
+        for (std::size_t j = 0; j < kMaxBlocks / 2; ++j) {
+            std::vector<double>& merged = m_means[j];
+            merged = m_means[2 * j];
+            for (std::size_t i = 0; i < merged.size(); ++i)
+                merged[i] = 0.5 * (merged[i] + m_means[2 * j + 1][i]);
+        }
+        m_means.resize(kMaxBlocks / 2);
+        m_block_cycles *= 2;
+    }
+
+    // The decay ratio over the last half of the history (at least ten cycles): a slow mode
+    // (multiplier 0.9999) changes the ratio over ten cycles by less than the noise, so a
+    // short span would report it as settled.
+    const std::size_t n = m_means.size();
+    if (n < 3) return m_estimate = HUGE_VAL;
+    const double now = drift(n - 1);
+    if (now <= 0.0) return m_estimate = 0.0;
+    const std::size_t min_span = (10 + m_block_cycles - 1) / m_block_cycles;
+    const std::size_t span = std::min(n - 2, std::max(min_span, (m_cycles / 2) / m_block_cycles));
+    const double before = drift(n - 1 - span);
+    if (!(before > now)) return m_estimate = HUGE_VAL;
+    // For one mode, T_n = T_inf + A mu^n, the remainder A mu^n at the end of the last block
+    // is this multiple of the drift between its mean and the one before (B cycles each); at
+    // B = 1 it is the familiar mu / (1 - mu).
+    const double B = static_cast<double>(m_block_cycles);
+    const double mu = std::pow(now / before, 1.0 / (static_cast<double>(span) * B));
+    const double muB = std::pow(mu, B);
+    return m_estimate = now * B * B * (1.0 - mu) * muB * muB / (mu * (1.0 - muB) * (1.0 - muB));
 }
 
 SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,

@@ -11,11 +11,14 @@
 //!     first two can hold while a slow mode (a thin tube wall of small heat capacity, with a
 //!     time constant of 10^4 cycles) is still tens of kelvin away,
 //! after at least min_cycles periods. Plain integration estimates the distance by
-//! geometric extrapolation of the largest temperature change per cycle d_n with the decay
-//! ratio mu over the last half of the history, d_n mu / (1 - mu) (Aitken's delta-squared
-//! idea; the dominant-eigenvalue method of Crowe & Nishio, AIChE J. 1975).
+//! geometric extrapolation of the largest drift per cycle d_n (between block means of the
+//! node temperatures, DistanceEstimate) with the decay ratio mu over the last half of the
+//! history, d_n mu / (1 - mu) (Aitken's delta-squared idea; the dominant-eigenvalue method
+//! of Crowe & Nishio, AIChE J. 1975).
 
+#include <cmath>
 #include <complex>
+#include <span>
 #include <functional>
 #include <string>
 #include <vector>
@@ -45,15 +48,30 @@ struct HistoryRow {
     double wall_time_s = 0.0;
 };
 
-//! Distance to the steady state from the largest temperature change per cycle.
+//! Distance to the steady state from the drift of node temperatures per cycle.
+//!
+//! The end-of-cycle temperatures jitter by the integrator's error (at rtol 1e-5 the gas at
+//! the pulse tube's cold end by ~0.01 K from one cycle to the next) while the slow modes
+//! drift by microkelvin per cycle: the drift is measured between means over blocks of
+//! cycles, whose jitter falls as the blocks grow. Blocks start one cycle long (so a short
+//! run is judged cycle by cycle) and double, pairwise merged, whenever kMaxBlocks are full:
+//! the blocks span between a half and the whole history, in bounded memory.
 class DistanceEstimate {
 public:
-    //! Add cycle n's largest change d_n [K]; returns the estimated distance [K] (infinite
-    //! until the change decays geometrically).
-    double add(double change);
+    //! Add the node temperatures at the end of a cycle [K]; returns the estimated distance
+    //! [K] (infinite until the drift decays geometrically; held between completed blocks).
+    double add(std::span<const double> temperatures);
 
 private:
-    std::vector<double> m_changes;
+    static constexpr std::size_t kMaxBlocks = 32;
+    double drift(std::size_t block) const;
+
+    std::size_t m_block_cycles = 1;
+    std::size_t m_cycles = 0;
+    std::size_t m_in_block = 0;
+    std::vector<double> m_sum;
+    std::vector<std::vector<double>> m_means;
+    double m_estimate = HUGE_VAL;
 };
 
 //! How the steady state was reached: effort, and the accelerator's own diagnostics.

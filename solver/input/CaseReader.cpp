@@ -529,6 +529,7 @@ SolverSpec readSolver(const MapReader& m)
     SolverSpec solver;
     solver.relative_tolerance = m.quantity("relative_tolerance");
     solver.absolute_tolerance_scale = m.quantity("absolute_tolerance_scale");
+    solver.mass_flow_tolerance_scale = m.quantity("mass_flow_tolerance_scale");
     solver.max_order = m.integer("max_order");
     solver.max_steps_per_cycle = m.integer("max_steps_per_cycle");
     const MapReader steady = m.map("steady");

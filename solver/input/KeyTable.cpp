@@ -402,6 +402,10 @@ std::vector<KeyTable> buildTables()
           quantity("absolute_tolerance_scale", D::Dimensionless, kPositive,
                    "multiplies the built-in absolute tolerances")
               .def("1"),
+          quantity("mass_flow_tolerance_scale", D::Dimensionless, kPositive,
+                   "multiplies, on top, the mass flows' absolute tolerance (relative "
+                   "tolerance x drive mass-flow amplitude)")
+              .def("1"),
           integer("max_order", Range::closed(1, 5),
                   "highest BDF order (above 2, lightly damped acoustic modes destabilise BDF)")
               .def("2"),

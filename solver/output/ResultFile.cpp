@@ -102,7 +102,7 @@ void writeCycle(Hdf5Writer& w, const Machine& machine, const CycleSamples& s)
 void writeHistory(Hdf5Writer& w, const Machine& machine, const std::vector<HistoryRow>& h)
 {
     std::vector<long> cycle, steps, rhs, jac;
-    std::vector<double> time, Tc, Qc, gross, pv, err, res, dT, wall, boundary;
+    std::vector<double> time, Tc, Qc, gross, pv, err, res, dT, distance, wall, boundary;
     for (const HistoryRow& r : h) {
         cycle.push_back(r.cycle);
         time.push_back(r.time);
@@ -113,6 +113,7 @@ void writeHistory(Hdf5Writer& w, const Machine& machine, const std::vector<Histo
         err.push_back(r.metrics.energy_balance_error);
         res.push_back(r.metrics.heat_residual);
         dT.push_back(r.metrics.max_temperature_change);
+        distance.push_back(r.metrics.distance_estimate);
         steps.push_back(r.work.steps);
         rhs.push_back(r.work.rhs_evaluations);
         jac.push_back(r.work.jacobian_evaluations);
@@ -128,6 +129,7 @@ void writeHistory(Hdf5Writer& w, const Machine& machine, const std::vector<Histo
     w.write("/history/energy_balance_error", err, "1");
     w.write("/history/steady_residual", res, "1");
     w.write("/history/max_temperature_change", dT, "K");
+    w.write("/history/distance_estimate", distance, "K");
     w.write("/history/steps", steps, "1");
     w.write("/history/rhs_evaluations", rhs, "1");
     w.write("/history/jacobian_evaluations", jac, "1");

@@ -77,7 +77,7 @@ MomentumFace::Result<S> MomentumFace::compute(const GasState<S>* before, const G
                                  l, c.flow_area);
             inertance += l / c.flow_area;
         }
-        resistance += l / (g.k * pf.dispersion * c.flow_area);
+        resistance += l / (g.k * thermalDispersion(pf, *c.passage) * c.flow_area);
         conducts = true;
     };
     half(*m_a, a, m_tube_a);

@@ -34,9 +34,8 @@ namespace coldtip {
 
 template <class S>
 struct PassageFlow {
-    S Re;         //!< Reynolds number on d_h and pore velocity [-]
-    S Pr;         //!< Prandtl number [-]
-    S dispersion; //!< k_eff / k of the gas along the passage [-]
+    S Re; //!< Reynolds number on d_h and pore velocity [-]
+    S Pr; //!< Prandtl number [-]
 };
 
 template <class S>
@@ -46,9 +45,16 @@ PassageFlow<S> passageFlow(const models::FlowPassage& passage, double flow_area,
     PassageFlow<S> f;
     f.Re = smoothAbs(mdot, eps) * passage.hydraulicDiameter() / (flow_area * g.mu);
     f.Pr = cp * g.mu / g.k;
-    const S Pe = f.Re * f.Pr;
-    f.dispersion = chain(passage.axialConductionFactor(valueOf(Pe)), Pe);
     return f;
+}
+
+//! k_eff / k of the gas along the passage [-] at the flow's Peclet number Re Pr: only the
+//! axial conduction needs it, the wall heat transfer does not (a power law per call).
+template <class S>
+S thermalDispersion(const PassageFlow<S>& f, const models::FlowPassage& passage)
+{
+    const S Pe = f.Re * f.Pr;
+    return chain(passage.axialConductionFactor(valueOf(Pe)), Pe);
 }
 
 //! The passage's quasi-steady f Re [-] at the flow's Reynolds number.

@@ -1,0 +1,92 @@
+// The plain run's stopping test: the distance to the periodic steady state extrapolated from
+// the drift of node temperatures (DistanceEstimate). References are the exact sums of the
+// geometric series a node follows when one mode with Floquet multiplier mu decays,
+// T_n = T_inf + A mu^n, so the distance after cycle n is A mu^n (Crowe & Nishio, "Convergence
+// promotion in the simulation of chemical processes - the general dominant eigenvalue method",
+// AIChE J. 21, 528, 1975, eq. 3).
+#include <catch2/catch.hpp>
+
+#include <cmath>
+#include <random>
+#include <vector>
+
+#include "solver/cycle/PeriodicSteadyState.hpp"
+
+using namespace coldtip;
+
+namespace {
+
+//! Feed n cycles of T_n = T_inf + A mu^n (+ jitter) on two nodes; returns the last estimate.
+double estimateAfter(long n, double mu, double amplitude, double jitter, unsigned seed = 1)
+{
+    std::mt19937 rng(seed);
+    std::normal_distribution<double> noise(0.0, jitter);
+    DistanceEstimate d;
+    double estimate = HUGE_VAL;
+    for (long k = 1; k <= n; ++k) {
+        const double slow = amplitude * std::pow(mu, static_cast<double>(k));
+        const std::vector<double> T{200.0 + slow + (jitter > 0 ? noise(rng) : 0.0),
+                                    85.0 + (jitter > 0 ? noise(rng) : 0.0)};
+        estimate = d.add(T);
+    }
+    return estimate;
+}
+
+} // namespace
+
+TEST_CASE("distance estimate equals the geometric remainder of a clean slow mode",
+          "[steady]")
+{
+    // mu = 0.999 (a 1000-cycle time constant), 5 K away at the start.
+    for (long n : {40L, 300L, 3000L}) {
+        const double exact = 5.0 * std::pow(0.999, static_cast<double>(n));
+        // Between completed blocks the estimate is held: it is the remainder at the end of
+        // the last complete block, at most a block (n/16 cycles) before cycle n.
+        const double held = std::pow(0.999, -static_cast<double>(n) / 16.0);
+        const double estimate = estimateAfter(n, 0.999, 5.0, 0.0);
+        INFO("after " << n << " cycles: exact " << exact << " K, estimate " << estimate);
+        CHECK(estimate >= 0.999 * exact);
+        CHECK(estimate <= 1.001 * exact * held);
+    }
+}
+
+TEST_CASE("distance estimate sees a slow mode through cycle-to-cycle jitter", "[steady]")
+{
+    // Jitter of 0.01 K per cycle (the integrator's, at rtol 1e-5 in the demo) on a mode with
+    // a 4000-cycle time constant, 0.5 K away at cycle 6000: the single-cycle change (0.01 K)
+    // never decays, but block means recover the drift.
+    const double mu = std::exp(-1.0 / 4000.0);
+    const long n = 6000;
+    const double exact = 5.0 * std::pow(mu, static_cast<double>(n));
+    for (unsigned seed = 1; seed <= 3; ++seed) {
+        const double estimate = estimateAfter(n, mu, 5.0, 0.01, seed);
+        INFO("seed " << seed << ": exact " << exact << " K, estimate " << estimate << " K");
+        CHECK(estimate > 0.7 * exact);
+        CHECK(estimate < 1.6 * exact);
+    }
+}
+
+TEST_CASE("distance estimate falls below 0.05 K once jitter alone is left", "[steady]")
+{
+    // A settled machine with 0.01 K of jitter: within 20,000 cycles the block means settle
+    // and the run may stop (the old single-cycle test never could: its change stayed 0.01 K).
+    int stopped = 0;
+    for (unsigned seed = 1; seed <= 5; ++seed) {
+        const double estimate = estimateAfter(20000, 0.5, 0.0, 0.01, seed);
+        INFO("seed " << seed << ": estimate " << estimate << " K");
+        CHECK(estimate >= 0.0);
+        if (estimate <= 0.05) ++stopped;
+    }
+    CHECK(stopped >= 3);
+}
+
+TEST_CASE("distance estimate is out of reach while the drift does not decay", "[steady]")
+{
+    // A linear ramp of 1 mK per cycle (a solid heating without limit): no decay ratio below 1.
+    DistanceEstimate d;
+    double estimate = 0.0;
+    for (int k = 1; k <= 500; ++k) {
+        estimate = d.add(std::vector<double>{100.0 + 1e-3 * k});
+        REQUIRE(estimate > 1e3);
+    }
+}
