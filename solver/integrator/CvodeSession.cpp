@@ -1,6 +1,6 @@
 #include "solver/integrator/CvodeSession.hpp"
 
-#include "solver/integrator/FastNorm.hpp"
+#include "solver/integrator/SerialKernels.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -47,7 +47,7 @@ CvodeSession::CvodeSession(const Network& network, const IntegratorOptions& opti
     m_context.reset(ctx);
     m_y.reset(N_VNew_Serial(n, ctx));
     if (!m_y) throw IntegratorError("N_VNew_Serial failed", -1, t0, {});
-    installFastNorm(m_y.get());
+    installSerialKernels(m_y.get());
     N_VConst(0.0, m_y.get());
     std::copy(y0.begin(), y0.end(), N_VGetArrayPointer(m_y.get()));
 
@@ -62,6 +62,7 @@ CvodeSession::CvodeSession(const Network& network, const IntegratorOptions& opti
     const sunindextype nnz = static_cast<sunindextype>(m_row_indices.size());
     m_matrix.reset(SUNSparseMatrix(n, n, nnz, CSC_MAT, ctx));
     if (!m_matrix) throw IntegratorError("SUNSparseMatrix failed", -1, t0, {});
+    installSparseKernels(m_matrix.get());
     m_solver.reset(SUNLinSol_KLU(m_y.get(), m_matrix.get(), ctx));
     if (!m_solver) throw IntegratorError("SUNLinSol_KLU failed", -1, t0, {});
 

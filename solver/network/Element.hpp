@@ -29,6 +29,9 @@ struct FlowFace {
 
 //! What an element sees during one evaluation: time, the state vector, and the gas and
 //! solid states derived from it once per evaluation ("update everything, then evaluate").
+template <class S>
+struct LaminarTubeMomentum; // elements/PassageLaws.hpp
+
 struct NetworkView {
     double t = 0.0;
     const double* y = nullptr;
@@ -37,6 +40,9 @@ struct NetworkView {
     const std::vector<GasState<double>>* gas = nullptr;
     const std::vector<SolidState<double>>* solid = nullptr;
     const GasProperties* properties = nullptr;
+    //! Per cell, the laminar part of the oscillating-flow momentum law of open tubes
+    //! (entries of other cells are unset).
+    const std::vector<LaminarTubeMomentum<double>>* laminar_tube = nullptr;
     double flow_smoothing = 0.0; //!< [kg/s] scale of the smooth |mdot| and upwind switch
 
     const GasCell& cell(int i) const { return (*cells)[i]; }

@@ -94,6 +94,13 @@ void Network::finalize()
     }
     m_gas_states.resize(m_cells.size());
     m_solid_states.resize(m_solids.size());
+    m_laminar_tube.resize(m_cells.size());
+    m_tube_cells.clear();
+    m_drive_omega = driveAngularFrequency(m_cells);
+    if (m_drive_omega > 0.0)
+        for (std::size_t i = 0; i < m_cells.size(); ++i)
+            if (m_cells[i].length > 0.0 && isOpenTube(m_cells[i].passage))
+                m_tube_cells.push_back(static_cast<int>(i));
 }
 
 void Network::updateStates(double t, std::span<const double> y) const
@@ -104,6 +111,9 @@ void Network::updateStates(double t, std::span<const double> y) const
     }
     for (std::size_t i = 0; i < m_solids.size(); ++i)
         m_solid_states[i] = solidState(y[m_solids[i].offset], m_solids[i]);
+    for (int i : m_tube_cells)
+        m_laminar_tube[i] = laminarTubeMomentum(
+            m_gas_states[i], m_cells[i].passage->hydraulicDiameter(), m_drive_omega);
 }
 
 NetworkView Network::view(double t, std::span<const double> y) const
@@ -117,6 +127,7 @@ NetworkView Network::view(double t, std::span<const double> y) const
     v.gas = &m_gas_states;
     v.solid = &m_solid_states;
     v.properties = &m_gas;
+    v.laminar_tube = &m_laminar_tube;
     v.flow_smoothing = m_flow_smoothing;
     return v;
 }

@@ -16,6 +16,7 @@
 #include <vector>
 
 #include "solver/network/Element.hpp"
+#include "solver/network/elements/PassageLaws.hpp"
 #include "solver/network/Quadrature.hpp"
 
 namespace coldtip {
@@ -146,6 +147,9 @@ private:
     // at a time; copies for parallel sweeps are separate networks).
     mutable std::vector<GasState<double>> m_gas_states;
     mutable std::vector<SolidState<double>> m_solid_states;
+    mutable std::vector<LaminarTubeMomentum<double>> m_laminar_tube;
+    std::vector<int> m_tube_cells; //!< cells with the oscillating-flow closure
+    double m_drive_omega = 0.0;    //!< [rad/s]
 };
 
 //! A trial state the physics cannot accept (negative mass or temperature): recoverable.

@@ -14,7 +14,7 @@ using namespace coldtip;
 
 TEST_CASE("the linear solution conserves mass in every cell", "[linear]")
 {
-    for (const std::string path : {std::string(COLDTIP_CASES "/ge-spectrometer-85K.yaml"),
+    for (const std::string& path : {std::string(COLDTIP_CASES "/ge-spectrometer-85K.yaml"),
                                    std::string(COLDTIP_TEST_DATA "/solver/cli-valid.yaml")}) {
         INFO(path);
         Machine machine(input::readCaseFile(path));

@@ -1,6 +1,7 @@
 #include "solver/network/elements/MomentumFace.hpp"
 
 #include <stdexcept>
+#include <type_traits>
 
 #include "solver/network/elements/FaceReconstruction.hpp"
 #include "solver/network/elements/PassageLaws.hpp"
@@ -64,12 +65,19 @@ MomentumFace::Result<S> MomentumFace::compute(const GasState<S>* before, const G
     S inertance(0.0);
     S resistance(0.0); // thermal, [K/W]
     bool conducts = false;
-    auto half = [&](const GasCell& c, const GasState<S>& g, bool tube) {
+    auto half = [&](const GasCell& c, int cell, const GasState<S>& g, bool tube) {
         if (c.length <= 0.0) return;
         const double l = 0.5 * c.length;
         const PassageFlow<S> pf = passageFlow(*c.passage, c.flow_area, g, mdot, eps, cp);
         if (tube && m_oscillating.active()) {
-            const TubeMomentumLaw<S> law = oscillatingTubeMomentum(pf, g, *c.passage, m_oscillating);
+            LaminarTubeMomentum<S> laminar;
+            if constexpr (std::is_same_v<S, double>)
+                laminar = (*v.laminar_tube)[cell];
+            else
+                laminar = laminarTubeMomentum(g, c.passage->hydraulicDiameter(),
+                                              m_oscillating.omega);
+            const TubeMomentumLaw<S> law =
+                oscillatingTubeMomentum(pf, laminar, *c.passage, m_oscillating);
             drop += frictionDrop(law.fRe, g, *c.passage, mdot, l, c.flow_area);
             inertance += law.inertance_factor * (l / c.flow_area);
         } else {
@@ -80,8 +88,8 @@ MomentumFace::Result<S> MomentumFace::compute(const GasState<S>* before, const G
         resistance += l / (g.k * thermalDispersion(pf, *c.passage) * c.flow_area);
         conducts = true;
     };
-    half(*m_a, a, m_tube_a);
-    half(*m_b, b, m_tube_b);
+    half(*m_a, m_face.from, a, m_tube_a);
+    half(*m_b, m_face.to, b, m_tube_b);
 
     using RC = ReconstructionCell<S>;
     const RC cell_before{before ? &before->T : nullptr, before ? m_before_cell->x : 0.0,

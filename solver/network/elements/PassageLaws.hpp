@@ -131,26 +131,40 @@ struct TubeMomentumLaw {
     S inertance_factor;
 };
 
+//! The laminar (Womersley) side of the blend and the viscous penetration depth [m]: they
+//! depend on the cell's gas state only, so the network evaluates them once per cell and
+//! right-hand side, and the two faces of the cell share them (NetworkView::laminar_tube).
 template <class S>
-TubeMomentumLaw<S> oscillatingTubeMomentum(const PassageFlow<S>& f, const GasState<S>& g,
+struct LaminarTubeMomentum {
+    S delta_nu;
+    TubeMomentumLaw<S> law;
+};
+
+template <class S>
+LaminarTubeMomentum<S> laminarTubeMomentum(const GasState<S>& g, double dh, double omega)
+{
+    const S delta = penetrationDepth(g.mu / g.rho, omega);
+    const S x = 0.5 * dh / delta;
+    const models::WomersleyFactors laminar = models::womersleyFactors(valueOf(x));
+    return {delta,
+            {models::OpenTube::kLaminarFrictionTimesReynolds * chain(laminar.resistance, x),
+             chain(laminar.inertance, x)}};
+}
+
+template <class S>
+TubeMomentumLaw<S> oscillatingTubeMomentum(const PassageFlow<S>& f,
+                                           const LaminarTubeMomentum<S>& laminar,
                                            const models::FlowPassage& passage,
                                            const OscillatingFlow& osc)
 {
     const double dh = passage.hydraulicDiameter();
-    const S delta = penetrationDepth(g.mu / g.rho, osc.omega);
-    const S x = 0.5 * dh / delta;
-    const S w = quasiSteadyWeight(f, delta, dh, osc);
-    const models::WomersleyFactors laminar = models::womersleyFactors(valueOf(x));
-    const S laminar_fRe = models::OpenTube::kLaminarFrictionTimesReynolds *
-                          chain(laminar.resistance, x);
-    const S laminar_L = chain(laminar.inertance, x);
-    TubeMomentumLaw<S> r;
+    const S w = quasiSteadyWeight(f, laminar.delta_nu, dh, osc);
     // Below the transition band w and its slope are exactly zero: the quasi-steady law
     // (a logarithm and powers) is not needed for most of the cycle.
-    if (valueOf(w) == 0.0) return {laminar_fRe, laminar_L};
-    r.fRe = laminar_fRe + w * (steadyFrictionTimesReynolds(f, passage) - laminar_fRe);
-    r.inertance_factor = laminar_L + w * (1.0 - laminar_L);
-    return r;
+    if (valueOf(w) == 0.0) return laminar.law;
+    const TubeMomentumLaw<S>& l = laminar.law;
+    return {l.fRe + w * (steadyFrictionTimesReynolds(f, passage) - l.fRe),
+            l.inertance_factor + w * (1.0 - l.inertance_factor)};
 }
 
 //! Nusselt number Nu(Re, Pr) with both partials. The passage supplies d/dRe; d/dPr comes
