@@ -77,13 +77,14 @@ std::string convergenceShortfall(const CycleMetrics& m, const SteadyOptions& o)
     return s;
 }
 
-double DistanceEstimate::drift(std::size_t block) const
+std::vector<double> DistanceEstimate::drift(std::size_t block) const
 {
     const std::vector<double>& a = m_means[block - 1];
     const std::vector<double>& b = m_means[block];
-    double largest = 0.0;
-    for (std::size_t i = 0; i < a.size(); ++i) largest = std::max(largest, std::abs(b[i] - a[i]));
-    return largest / static_cast<double>(m_block_cycles);
+    std::vector<double> d(a.size());
+    for (std::size_t i = 0; i < a.size(); ++i)
+        d[i] = (b[i] - a[i]) / static_cast<double>(m_block_cycles);
+    return d;
 }
 
 double DistanceEstimate::add(std::span<const double> temperatures)
@@ -112,19 +113,39 @@ double DistanceEstimate::add(std::span<const double> temperatures)
     // short span would report it as settled.
     const std::size_t n = m_means.size();
     if (n < 3) return m_estimate = HUGE_VAL;
-    const double now = drift(n - 1);
-    if (now <= 0.0) return m_estimate = 0.0;
+    const std::vector<double> now = drift(n - 1);
+    double largest = 0.0;
+    for (double d : now) largest = std::max(largest, std::abs(d));
+    if (largest <= 0.0) return m_estimate = 0.0;
     const std::size_t min_span = (10 + m_block_cycles - 1) / m_block_cycles;
     const std::size_t span = std::min(n - 2, std::max(min_span, (m_cycles / 2) / m_block_cycles));
-    const double before = drift(n - 1 - span);
-    if (!(before > now)) return m_estimate = HUGE_VAL;
+    const std::vector<double> before = drift(n - 1 - span);
+    // The decay ratio over the span. By default the largest drift now over the largest then
+    // (robust to jitter, which is uncorrelated from block to block). When the nodes that
+    // drift now (at least a tenth of the largest) drifted the same way then (cosine >= 0.9:
+    // one mode carries both), the drift then is projected on the drift now instead: the
+    // ratio is that mode's own, even if a faster mode, since decayed, dominated other nodes
+    // then (a ratio of the largest drifts would mix the two and underestimate the distance;
+    // tests/solver/DistanceEstimateTest.cpp).
+    double largest_before = 0.0;
+    for (double d : before) largest_before = std::max(largest_before, std::abs(d));
+    double ratio = largest / largest_before;
+    double nn = 0.0, bb = 0.0, nb = 0.0;
+    for (std::size_t i = 0; i < now.size(); ++i) {
+        if (std::abs(now[i]) < kSignificantDrift * largest) continue;
+        nn += now[i] * now[i];
+        bb += before[i] * before[i];
+        nb += now[i] * before[i];
+    }
+    if (nb > 0.0 && nb >= kCoherentDrift * std::sqrt(nn * bb)) ratio = nn / nb;
+    if (!(ratio < 1.0)) return m_estimate = HUGE_VAL;
     // For one mode, T_n = T_inf + A mu^n, the remainder A mu^n at the end of the last block
     // is this multiple of the drift between its mean and the one before (B cycles each); at
     // B = 1 it is the familiar mu / (1 - mu).
     const double B = static_cast<double>(m_block_cycles);
-    const double mu = std::pow(now / before, 1.0 / (static_cast<double>(span) * B));
+    const double mu = std::pow(ratio, 1.0 / (static_cast<double>(span) * B));
     const double muB = std::pow(mu, B);
-    return m_estimate = now * B * B * (1.0 - mu) * muB * muB / (mu * (1.0 - muB) * (1.0 - muB));
+    return m_estimate = largest * B * B * (1.0 - mu) * muB * muB / (mu * (1.0 - muB) * (1.0 - muB));
 }
 
 SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,

@@ -64,7 +64,12 @@ public:
 
 private:
     static constexpr std::size_t kMaxBlocks = 32;
-    double drift(std::size_t block) const;
+    //! Nodes drifting at least this fraction of the largest drift take part in the projection.
+    static constexpr double kSignificantDrift = 0.1;
+    //! Cosine between the drifts now and then above which one mode is taken to carry both.
+    static constexpr double kCoherentDrift = 0.9;
+    //! Drift per cycle of every node between the means of blocks block - 1 and block [K].
+    std::vector<double> drift(std::size_t block) const;
 
     std::size_t m_block_cycles = 1;
     std::size_t m_cycles = 0;

@@ -9,10 +9,11 @@
 //! than the KLU solves. N_Vector and SUNMatrix operations are public tables of function
 //! pointers that a user may replace (sundials_nvector.h, sundials_matrix.h; CVODES user
 //! guide v6.4, "Description of the NVECTOR module"); clones copy the table. The kernels here
-//! do the same arithmetic in the same order as SUNDIALS' serial and sparse modules, special
-//! cases included, so results are identical to the last bit (tests/solver/
-//! SerialKernelsTest.cpp); the WRMS norm alone sums in four partial sums (rounding-level
-//! differences) to break the dependent chain of additions.
+//! do the same arithmetic in the same order as the operations CVODE called before (the
+//! serial and sparse modules' own, special cases included; for the fused operations, which
+//! the serial module leaves off, SUNDIALS' generic fallbacks), so results are identical to
+//! the last bit (tests/solver/SerialKernelsTest.cpp); the WRMS norm alone sums in four
+//! partial sums (rounding-level differences) to break the dependent chain of additions.
 
 #include <nvector/nvector_serial.h>
 #include <sunmatrix/sunmatrix_sparse.h>

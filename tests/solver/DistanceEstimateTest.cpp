@@ -90,3 +90,27 @@ TEST_CASE("distance estimate is out of reach while the drift does not decay", "[
         REQUIRE(estimate > 1e3);
     }
 }
+
+TEST_CASE("distance estimate follows the slow mode while a faster one dominated other nodes",
+          "[steady]")
+{
+    // Node 0 relaxes fast (20 K, 300-cycle time constant), node 1 slowly (5 K, 4000 cycles),
+    // as the regenerator and a cold block do after a start. After 2400 cycles the largest
+    // drift half the history ago (cycle 1200) was node 0's: a ratio of the largest drifts
+    // then and now would mix the two modes, put the time constant near 2000 cycles and the
+    // distance at half the true 2.74 K. The drift then, projected on the drift now, keeps
+    // the slow mode's own ratio.
+    const double fast = std::exp(-1.0 / 300.0), slow = std::exp(-1.0 / 4000.0);
+    DistanceEstimate d;
+    double estimate = HUGE_VAL;
+    const long n = 2400;
+    for (long k = 1; k <= n; ++k) {
+        const double K = static_cast<double>(k);
+        estimate = d.add(std::vector<double>{300.0 + 20.0 * std::pow(fast, K),
+                                             85.0 + 5.0 * std::pow(slow, K)});
+    }
+    const double exact = 5.0 * std::pow(slow, static_cast<double>(n));
+    INFO("exact " << exact << " K, estimate " << estimate << " K");
+    CHECK(estimate > 0.8 * exact);
+    CHECK(estimate < 1.2 * exact);
+}
