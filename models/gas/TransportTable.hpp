@@ -55,6 +55,15 @@ public:
     Slope2 viscosity(double T, double rho) const { return lookup(0, T, rho); }
     //! k(T, rho) [W/(m K)] with d/dT [W/(m K^2)] and d/drho [W m^2/(kg K)].
     Slope2 conductivity(double T, double rho) const { return lookup(1, T, rho); }
+    //! Both at one point, located once (the engine's gas states need both).
+    struct Properties {
+        Slope2 viscosity, conductivity;
+    };
+    Properties both(double T, double rho) const
+    {
+        const Place p = locate(T, rho);
+        return {evaluate(0, p), evaluate(1, p)};
+    }
 
     double minTemperature() const { return m_grid.minimum(); }
     double maxTemperature() const { return m_grid.maximum(); }
@@ -84,8 +93,16 @@ private:
     // adjacent so that the two lookups the engine makes at one point share cache lines.
     using Patch = std::array<double, 16>;
 
-    Slope2 lookup(int property, double T, double rho) const
+    //! Where (T, rho) falls in the table, clamped to its range.
+    struct Place {
+        std::size_t patch = 0; //!< index of the viscosity patch; conductivity's is next
+        double t = 0.0, u = 0.0;       //!< position in the cell [-]
+        double dT_scale = 0.0;         //!< d t / d T [1/K], 0 if clamped
+        double drho_scale = 0.0;       //!< d u / d rho [m^3/kg], 0 if clamped
+    };
+    Place locate(double T, double rho) const
     {
+        Place p;
         double dT_scale = 1.0;
         if (T <= m_grid.minimum()) {
             T = m_grid.minimum();
@@ -94,21 +111,28 @@ private:
             T = m_grid.maximum();
             dT_scale = 0.0;
         }
-        double drho_scale = m_invDrho;
+        p.drho_scale = m_invDrho;
         if (rho <= 0.0) {
             rho = 0.0;
-            drho_scale = 0.0;
+            p.drho_scale = 0.0;
         } else if (rho >= m_rhoMax) {
             rho = m_rhoMax;
-            drho_scale = 0.0;
+            p.drho_scale = 0.0;
         }
         const int i = m_grid.cell(T);
-        const double t = (T - m_grid.node(i)) * m_invWidth[static_cast<std::size_t>(i)];
+        const double inv_width = m_invWidth[static_cast<std::size_t>(i)];
+        p.t = (T - m_grid.node(i)) * inv_width;
+        p.dT_scale = inv_width * dT_scale;
         const double us = rho * m_invDrho;
         const int j = std::min(static_cast<int>(us), m_nRho - 1);
-        const double u = us - j;
-        const Patch& a =
-            m_patches[static_cast<std::size_t>(2 * (i * m_nRho + j) + property)];
+        p.u = us - j;
+        p.patch = static_cast<std::size_t>(2 * (i * m_nRho + j));
+        return p;
+    }
+    Slope2 evaluate(int property, const Place& p) const
+    {
+        const Patch& a = m_patches[p.patch + static_cast<std::size_t>(property)];
+        const double t = p.t, u = p.u;
         // c_k(u) = sum_l a[4k + l] u^l and its u-derivative, then Horner in t.
         double c[4];
         double cu[4];
@@ -120,8 +144,11 @@ private:
         const double value = c[0] + t * (c[1] + t * (c[2] + t * c[3]));
         const double dt = c[1] + t * (2.0 * c[2] + 3.0 * t * c[3]);
         const double du = cu[0] + t * (cu[1] + t * (cu[2] + t * cu[3]));
-        return {value, dt * m_invWidth[static_cast<std::size_t>(i)] * dT_scale,
-                du * drho_scale};
+        return {value, dt * p.dT_scale, du * p.drho_scale};
+    }
+    Slope2 lookup(int property, double T, double rho) const
+    {
+        return evaluate(property, locate(T, rho));
     }
 
     OctaveGrid m_grid;

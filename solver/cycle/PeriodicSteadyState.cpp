@@ -137,13 +137,17 @@ double DistanceEstimate::add(std::span<const double> temperatures)
         bb += before[i] * before[i];
         nb += now[i] * before[i];
     }
-    if (nb > 0.0 && nb >= kCoherentDrift * std::sqrt(nn * bb)) ratio = nn / nb;
+    // The projection is a weighted harmonic mean of the nodes' own ratios, so it is never
+    // allowed below the largest-drift ratio: a node that does not decay still blocks.
+    if (nb > 0.0 && nb >= kCoherentDrift * std::sqrt(nn) * std::sqrt(bb))
+        ratio = std::max(ratio, nn / nb);
     if (!(ratio < 1.0)) return m_estimate = HUGE_VAL;
     // For one mode, T_n = T_inf + A mu^n, the remainder A mu^n at the end of the last block
     // is this multiple of the drift between its mean and the one before (B cycles each); at
     // B = 1 it is the familiar mu / (1 - mu).
     const double B = static_cast<double>(m_block_cycles);
     const double mu = std::pow(ratio, 1.0 / (static_cast<double>(span) * B));
+    if (!(mu < 1.0)) return m_estimate = HUGE_VAL; // a ratio within rounding of 1
     const double muB = std::pow(mu, B);
     return m_estimate = largest * B * B * (1.0 - mu) * muB * muB / (mu * (1.0 - muB) * (1.0 - muB));
 }

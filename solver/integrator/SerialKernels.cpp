@@ -90,7 +90,7 @@ int linearCombination(int nvec, sunrealtype* c, N_Vector* X, N_Vector z)
     // z = c0 X0, then z += c_i X_i in order (for z = X0 too): the sums of SUNDIALS' generic
     // fallback (N_VScale, then N_VLinearSum per term), which CVODE used while the serial
     // module's fused operations were off; the fused version differs in rounding only, for two
-    // terms with equal coefficients.
+    // terms with equal or opposite coefficients.
     const sunrealtype* x0 = data(X[0]);
     for (sunindextype k = 0; k < n; ++k) zd[k] = c[0] * x0[k];
     for (int i = 1; i < nvec; ++i) {
@@ -151,9 +151,10 @@ int copyMatrix(SUNMatrix A, SUNMatrix B)
     if (SM_ROWS_S(A) != SM_ROWS_S(B) || SM_COLUMNS_S(A) != SM_COLUMNS_S(B) ||
         SM_SPARSETYPE_S(A) != SM_SPARSETYPE_S(B) || SM_NNZ_S(B) < nz)
         return SUNMatCopy_Sparse(A, B);
-    zeroMatrix(B);
     std::memcpy(SM_DATA_S(B), SM_DATA_S(A), sizeof(sunrealtype) * nz);
     std::memcpy(SM_INDEXVALS_S(B), SM_INDEXVALS_S(A), sizeof(sunindextype) * nz);
+    std::memset(SM_DATA_S(B) + nz, 0, sizeof(sunrealtype) * (SM_NNZ_S(B) - nz));
+    std::memset(SM_INDEXVALS_S(B) + nz, 0, sizeof(sunindextype) * (SM_NNZ_S(B) - nz));
     std::memcpy(SM_INDEXPTRS_S(B), SM_INDEXPTRS_S(A), sizeof(sunindextype) * SM_NP_S(A));
     SM_INDEXPTRS_S(B)[SM_NP_S(A)] = nz;
     return 0;

@@ -46,8 +46,9 @@ GasState<S> gasState(const S& m, const S& E, double V, const GasProperties& gas)
     g.h = gas.cp * g.T;
     const double T = valueOf(g.T);
     const double rho = valueOf(g.rho);
-    g.mu = chain(gas.transport->viscosity(T, rho), g.T, g.rho);
-    g.k = chain(gas.transport->conductivity(T, rho), g.T, g.rho);
+    const models::TransportTable::Properties t = gas.transport->both(T, rho);
+    g.mu = chain(t.viscosity, g.T, g.rho);
+    g.k = chain(t.conductivity, g.T, g.rho);
     return g;
 }
 

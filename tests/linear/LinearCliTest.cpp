@@ -31,7 +31,7 @@ TEST_CASE("coldtip linear --json prints every component's ports and the summary"
 {
     TempFolder tmp;
     const std::string file = COLDTIP_TEST_DATA "/solver/cli-valid.yaml";
-    for (const std::string mode : {std::string(""), std::string(" --lumped")}) {
+    for (const std::string& mode : {std::string(""), std::string(" --lumped")}) {
         INFO("mode" << mode);
         const ProcessResult r = runColdtip(
             tmp, "linear " + shellQuoted(file) + mode + " --json -o " + shellQuoted(tmp.file("l.h5")));

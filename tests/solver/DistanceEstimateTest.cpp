@@ -114,3 +114,19 @@ TEST_CASE("distance estimate follows the slow mode while a faster one dominated 
     CHECK(estimate > 0.8 * exact);
     CHECK(estimate < 1.2 * exact);
 }
+
+TEST_CASE("distance estimate stays out of reach while one node ramps beside a decaying one",
+          "[steady]")
+{
+    // Node 0 heats without limit (1 mK per cycle), node 1 decays towards 85 K from the same
+    // drift. The two drift vectors stay nearly parallel (cosine above 0.9 for much of the
+    // run), and their projection alone, a mean of the nodes' own ratios, would report a
+    // decay: the ramping node must keep the estimate out of reach.
+    DistanceEstimate d;
+    for (int k = 1; k <= 4000; ++k) {
+        const double K = static_cast<double>(k);
+        const double estimate =
+            d.add(std::vector<double>{100.0 + 1e-3 * K, 85.0 + 2.0 * std::exp(-K / 2000.0)});
+        if (k >= 3) REQUIRE(estimate > 1e3);
+    }
+}

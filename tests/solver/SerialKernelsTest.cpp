@@ -89,30 +89,36 @@ TEST_CASE("compiled scale, constant and fused operations match SUNDIALS' serial 
         CHECK(sameBits(z.plain.get(), z.fast.get()));
     }
 
-    // z = sum c_i X_i for 1 to 4 terms, z separate and z = X_0 (the forms CVODE uses).
+    // z = sum c_i X_i for 1 to 4 terms, z separate, z = X_0 and z = X_1; coefficients with
+    // c0 = +-c1, where the fused serial version would round differently. The reference is
+    // what CVODE ran before the kernels: SUNDIALS' generic fallback (N_VScale, then
+    // N_VLinearSum per term), which N_VLinearCombination takes on a plain serial vector.
+    const std::vector<std::vector<double>> coefficient_sets{
+        {1.0, 0.25, -1.0, 3.0}, {-0.7, 0.25, -1.0, 3.0}, {0.3, 0.3, 1.0, -2.0}, {0.3, -0.3, 0.5, 0.5}};
     for (int nvec = 1; nvec <= 4; ++nvec)
-        for (int alias = 0; alias < 2; ++alias)
-            for (double c0 : {1.0, -0.7}) {
+        for (int alias = 0; alias < 3; ++alias)
+            for (auto coef : coefficient_sets) {
+                if (alias == 2 && nvec < 2) continue;
                 std::vector<Pair> X;
                 for (int i = 0; i < nvec; ++i) X.push_back(randomPair(c.ctx, 10 + i));
                 Pair z = randomPair(c.ctx, 20);
-                std::vector<double> coef{c0, 0.25, -1.0, 3.0};
                 std::vector<N_Vector> Xp, Xf;
                 for (auto& p : X) {
                     Xp.push_back(p.plain.get());
                     Xf.push_back(p.fast.get());
                 }
-                N_Vector zp = alias ? Xp[0] : z.plain.get();
-                N_Vector zf = alias ? Xf[0] : z.fast.get();
-                REQUIRE(N_VLinearCombination_Serial(nvec, coef.data(), Xp.data(), zp) == 0);
+                N_Vector zp = alias ? Xp[alias - 1] : z.plain.get();
+                N_Vector zf = alias ? Xf[alias - 1] : z.fast.get();
+                REQUIRE(N_VLinearCombination(nvec, coef.data(), Xp.data(), zp) == 0);
                 REQUIRE(N_VLinearCombination(nvec, coef.data(), Xf.data(), zf) == 0);
-                INFO("linear combination of " << nvec << ", alias " << alias << ", c0 " << c0);
+                INFO("linear combination of " << nvec << ", alias " << alias << ", c0 " << coef[0]
+                                              << ", c1 " << coef[1]);
                 CHECK(sameBits(zp, zf));
             }
 
-    // Z_i = a_i x + Y_i, Z separate and Z = Y.
+    // Z_i = a_i x + Y_i: Z separate, Z = Y, and Z_0 = x.
     for (int nvec = 1; nvec <= 3; ++nvec)
-        for (int alias = 0; alias < 2; ++alias) {
+        for (int alias = 0; alias < 3; ++alias) {
             Pair x = randomPair(c.ctx, 30);
             std::vector<Pair> Y, Z;
             std::vector<N_Vector> Yp, Yf, Zp, Zf;
@@ -121,13 +127,26 @@ TEST_CASE("compiled scale, constant and fused operations match SUNDIALS' serial 
                 Z.push_back(randomPair(c.ctx, 40 + i));
                 Yp.push_back(Y.back().plain.get());
                 Yf.push_back(Y.back().fast.get());
-                Zp.push_back(alias ? Yp.back() : Z.back().plain.get());
-                Zf.push_back(alias ? Yf.back() : Z.back().fast.get());
+                Zp.push_back(alias == 1 ? Yp.back() : Z.back().plain.get());
+                Zf.push_back(alias == 1 ? Yf.back() : Z.back().fast.get());
+            }
+            if (alias == 2) {
+                Zp[0] = x.plain.get();
+                Zf[0] = x.fast.get();
             }
             std::vector<double> a{1.0, -0.4, 2.0};
-            REQUIRE(N_VScaleAddMulti_Serial(nvec, a.data(), x.plain.get(), Yp.data(), Zp.data()) == 0);
+            REQUIRE(N_VScaleAddMulti(nvec, a.data(), x.plain.get(), Yp.data(), Zp.data()) == 0);
             REQUIRE(N_VScaleAddMulti(nvec, a.data(), x.fast.get(), Yf.data(), Zf.data()) == 0);
             for (int i = 0; i < nvec; ++i) CHECK(sameBits(Zp[i], Zf[i]));
+        }
+
+    // z = x = y: linear sums of a vector with itself.
+    for (double a : kCoefficients)
+        for (double b : kCoefficients) {
+            Pair x = randomPair(c.ctx, 60);
+            N_VLinearSum_Serial(a, x.plain.get(), b, x.plain.get(), x.plain.get());
+            N_VLinearSum(a, x.fast.get(), b, x.fast.get(), x.fast.get());
+            CHECK(sameBits(x.plain.get(), x.fast.get()));
         }
 }
 
@@ -173,6 +192,9 @@ TEST_CASE("compiled sparse copy, zero and scale-add-identity match SUNDIALS' spa
 
         SUNMatrix clone = SUNMatClone(fast); // carries the compiled operations
         REQUIRE(clone->ops->copy == fast->ops->copy);
+        REQUIRE(clone->ops->zero == fast->ops->zero);
+        REQUIRE(clone->ops->scaleaddi == fast->ops->scaleaddi);
+        REQUIRE(clone->ops->clone == fast->ops->clone);
         REQUIRE(SUNMatCopy(fast, clone) == 0);
         CHECK(std::memcmp(SM_INDEXPTRS_S(clone), SM_INDEXPTRS_S(plain), sizeof(sunindextype) * 6) == 0);
         CHECK(std::memcmp(SM_DATA_S(clone), SM_DATA_S(plain), sizeof(double) * nz) == 0);
@@ -180,6 +202,15 @@ TEST_CASE("compiled sparse copy, zero and scale-add-identity match SUNDIALS' spa
         for (sunindextype k = 0; k < SM_NNZ_S(clone); ++k) CHECK(SM_DATA_S(clone)[k] == 0.0);
         CHECK(SM_INDEXPTRS_S(clone)[5] == 0);
         SUNMatDestroy(clone);
+
+        // Into a matrix with too little room: SUNDIALS' copy, which grows it.
+        SUNMatrix small = SUNSparseMatrix(5, 5, 4, CSC_MAT, c.ctx);
+        installSparseKernels(small);
+        REQUIRE(SUNMatCopy(fast, small) == 0);
+        REQUIRE(SM_NNZ_S(small) >= nz);
+        CHECK(std::memcmp(SM_DATA_S(small), SM_DATA_S(plain), sizeof(double) * nz) == 0);
+        CHECK(std::memcmp(SM_INDEXVALS_S(small), SM_INDEXVALS_S(plain), sizeof(sunindextype) * nz) == 0);
+        SUNMatDestroy(small);
         SUNMatDestroy(plain);
         SUNMatDestroy(fast);
     }
