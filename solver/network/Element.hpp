@@ -41,7 +41,7 @@ struct NetworkView {
     const std::vector<SolidState<double>>* solid = nullptr;
     const GasProperties* properties = nullptr;
     //! Per cell, the laminar part of the oscillating-flow momentum law of open tubes
-    //! (entries of other cells are unset).
+    //! (entries of other cells are unset; null in the view the Jacobian is assembled on).
     const std::vector<LaminarTubeMomentum<double>>* laminar_tube = nullptr;
     double flow_smoothing = 0.0; //!< [kg/s] scale of the smooth |mdot| and upwind switch
 

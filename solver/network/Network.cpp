@@ -99,11 +99,11 @@ void Network::finalize()
     m_drive_omega = driveAngularFrequency(m_cells);
     if (m_drive_omega > 0.0)
         for (std::size_t i = 0; i < m_cells.size(); ++i)
-            if (m_cells[i].length > 0.0 && isOpenTube(m_cells[i].passage))
+            if (hasTubeMomentumClosure(m_cells[i]))
                 m_tube_cells.push_back(static_cast<int>(i));
 }
 
-void Network::updateStates(double t, std::span<const double> y) const
+void Network::updateStates(double t, std::span<const double> y, bool tube_closures) const
 {
     for (std::size_t i = 0; i < m_cells.size(); ++i) {
         const GasCell& c = m_cells[i];
@@ -111,14 +111,15 @@ void Network::updateStates(double t, std::span<const double> y) const
     }
     for (std::size_t i = 0; i < m_solids.size(); ++i)
         m_solid_states[i] = solidState(y[m_solids[i].offset], m_solids[i]);
-    for (int i : m_tube_cells)
-        m_laminar_tube[i] = laminarTubeMomentum(
-            m_gas_states[i], m_cells[i].passage->hydraulicDiameter(), m_drive_omega);
+    if (tube_closures)
+        for (int i : m_tube_cells)
+            m_laminar_tube[i] = laminarTubeMomentum(
+                m_gas_states[i], m_cells[i].passage->hydraulicDiameter(), m_drive_omega);
 }
 
-NetworkView Network::view(double t, std::span<const double> y) const
+NetworkView Network::view(double t, std::span<const double> y, bool tube_closures) const
 {
-    updateStates(t, y);
+    updateStates(t, y, tube_closures);
     NetworkView v;
     v.t = t;
     v.y = y.data();
@@ -127,7 +128,7 @@ NetworkView Network::view(double t, std::span<const double> y) const
     v.gas = &m_gas_states;
     v.solid = &m_solid_states;
     v.properties = &m_gas;
-    v.laminar_tube = &m_laminar_tube;
+    v.laminar_tube = tube_closures ? &m_laminar_tube : nullptr;
     v.flow_smoothing = m_flow_smoothing;
     return v;
 }
@@ -143,7 +144,8 @@ void Network::evaluate(double t, std::span<const double> y, std::span<double> yd
 
 void Network::jacobian(double t, std::span<const double> y, std::span<double> values) const
 {
-    const NetworkView v = view(t, y);
+    // Dual-number elements compute the tube closure from their seeded states themselves.
+    const NetworkView v = view(t, y, false);
     std::fill(values.begin(), values.end(), 0.0);
     for (const auto& e : m_elements) e->addJacobian(v, values.data());
 }

@@ -117,11 +117,13 @@ public:
     double flowSmoothing() const { return m_flow_smoothing; }
     void setFlowSmoothing(double eps) { m_flow_smoothing = eps; }
 
-    //! The view elements evaluate against; gas/solid states refreshed from y.
-    NetworkView view(double t, std::span<const double> y) const;
+    //! The view elements evaluate against; gas/solid states refreshed from y, and with
+    //! tube_closures the laminar tube-momentum closures of the tube cells too (their
+    //! double-precision evaluations read them; the Jacobian's dual numbers do not).
+    NetworkView view(double t, std::span<const double> y, bool tube_closures = true) const;
 
 private:
-    void updateStates(double t, std::span<const double> y) const;
+    void updateStates(double t, std::span<const double> y, bool tube_closures) const;
 
     GasProperties m_gas;
     std::vector<GasCell> m_cells;

@@ -20,8 +20,8 @@ MomentumFace::MomentumFace(const FlowFace& face, int face_index, int before, int
     for (const GasCell* c : {m_a, m_b})
         if (c->length > 0.0) m_inertance += 0.5 * c->length / c->flow_area;
     m_oscillating.omega = driveAngularFrequency(cells);
-    m_tube_a = m_a->length > 0.0 && isOpenTube(m_a->passage);
-    m_tube_b = m_b->length > 0.0 && isOpenTube(m_b->passage);
+    m_tube_a = hasTubeMomentumClosure(*m_a);
+    m_tube_b = hasTubeMomentumClosure(*m_b);
     if (m_inertance <= 0.0)
         throw std::logic_error("face " + face.name + " joins two lumped volumes: it has no "
                                "inertance (put a passage or an orifice between them)");

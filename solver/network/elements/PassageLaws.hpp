@@ -102,6 +102,14 @@ inline bool isOpenTube(const models::FlowPassage* passage)
     return dynamic_cast<const models::OpenTube*>(passage) != nullptr;
 }
 
+//! Whether a cell's half-passages get the oscillating-flow momentum closure: a distributed
+//! cell (not a lumped volume) in an open tube. The network caches the closure's laminar
+//! part for exactly these cells, and the momentum faces read the cache for them.
+inline bool hasTubeMomentumClosure(const GasCell& c)
+{
+    return c.length > 0.0 && isOpenTube(c.passage);
+}
+
 //! Penetration depth sqrt(2 D/omega) [m] of a diffusivity D [m^2/s].
 template <class S>
 S penetrationDepth(const S& diffusivity, double omega)
