@@ -72,10 +72,12 @@ int runCase(const RunOptions& opt, const RunInfo& info)
         for (int i = 0; i < report.newton_iterations; ++i) {
             std::string mu;
             for (auto m : report.floquet[i]) mu += fmt::format(" {:.5f}", std::abs(m));
-            progress.note(fmt::format("newton step {}: residual {:.3e} K (RMS), {} GMRES "
-                                      "iterations, dominant Floquet multipliers |mu|:{}",
-                                      i + 1, report.newton_residual[i],
-                                      report.krylov_iterations[i], mu));
+            progress.note(fmt::format("newton step {}: {} period(s) per map, residual {:.3e} K "
+                                      "(RMS), {} GMRES iterations, correction {:.3g} K, "
+                                      "dominant Floquet multipliers |mu|:{}",
+                                      i + 1, report.periods_per_map[i],
+                                      report.newton_residual[i], report.krylov_iterations[i],
+                                      report.newton_correction[i], mu));
         }
 
     std::string status = out.converged ? "converged" : "not-converged";

@@ -86,6 +86,8 @@ struct SolverDiagnostics {
     int newton_iterations = 0;
     std::vector<double> newton_residual;   //!< RMS of G(x) - x per Newton step [K]
     std::vector<int> krylov_iterations;    //!< GMRES iterations per Newton step
+    std::vector<double> newton_correction; //!< largest |dx| per Newton step [K]
+    std::vector<int> periods_per_map;      //!< k of each Newton step
     //! Dominant Floquet multipliers per Newton step (largest modulus first).
     std::vector<std::vector<std::complex<double>>> floquet;
 };

@@ -216,12 +216,13 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
         runner.start(period_index, y0);
         for (int w = 0; w < shooting.warmup_cycles; ++w)
             if (plainCycle()) return out;
-        const int k = shooting.cycles_per_map;
+        int k = shooting.cycles_per_map;
         newton_phase = true;
         double forcing = shooting.max_forcing;
         double previous_residual = 0.0;
         bool tighten = false;
-        for (int it = 1; it <= shooting.max_newton; ++it) {
+        double accepted_correction = -1.0; // >= 0: the last correction met the test
+        for (int it = 1; it <= shooting.max_newton || accepted_correction >= 0.0; ++it) {
             const long n0 = runner.periodIndex();
             const std::vector<double> y_start = out.state;
             const Vec x = toEigen(slow.extract(y_start));
@@ -230,6 +231,27 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             const std::vector<double> y_end = out.state;
             const long n_end = runner.periodIndex();
             const Vec g = toEigen(slow.extract(y_end));
+            if (accepted_correction >= 0.0) {
+                // The cycles from the corrected start are the answer; their distance to the
+                // steady state is at most the correction just applied (a conservative figure:
+                // Newton leaves less), and plain cycles do not move the slow modes. A small
+                // machine's energy balance scatters from cycle to cycle about its tolerance:
+                // like plain integration, take the first cycle that passes, within 2k.
+                for (int extra = 0;; ++extra) {
+                    out.metrics.distance_estimate = accepted_correction;
+                    out.history.back().metrics.distance_estimate = accepted_correction;
+                    out.converged = steadyStateReached(out.metrics, options,
+                                                       static_cast<long>(out.history.size()));
+                    if (out.converged) {
+                        if (on_cycle && !on_cycle(out)) stop = true;
+                        return out;
+                    }
+                    if (extra == 2 * k) break;
+                    if (plainCycle()) return out;
+                }
+                accepted_correction = -1.0;
+                continue; // a new base from here
+            }
             const Vec F = g - x;
             report.newton_residual.push_back(rms(F));
             const double residual = F.norm();
@@ -263,6 +285,8 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             report.newton_iterations = it;
             Vec dx = sol.x;
             const double largest = dx.cwiseAbs().maxCoeff();
+            report.newton_correction.push_back(largest);
+            report.periods_per_map.push_back(k);
             // The Newton correction estimates how far the base cycles are from the fixed
             // point: with it below tolerance the last base cycle is the answer.
             out.metrics.distance_estimate = largest;
@@ -271,11 +295,21 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             // slow modes by up to 1/(1 - mu): it may not declare convergence.
             const bool reached = steadyStateReached(out.metrics, options,
                                                     static_cast<long>(out.history.size()));
-            out.converged = reached && forcing <= shooting.trusted_forcing;
-            tighten = reached && !out.converged;
-            if (out.converged) {
-                if (on_cycle && !on_cycle(out)) stop = true;
-                return out;
+            // Near the answer the slow part of one period's residual is below the defect of
+            // a restarted integration: only a map of settle_cycles_per_map periods may judge.
+            const bool settled_map = k == shooting.settle_cycles_per_map;
+            // The correction met the test: apply it, and let the base cycles from the
+            // corrected start be the answer (the uncorrected ones sit a full correction away
+            // along the slow modes).
+            if (reached && settled_map && forcing <= shooting.trusted_forcing)
+                accepted_correction = largest;
+            tighten = reached && settled_map && accepted_correction < 0.0;
+            if (!settled_map &&
+                largest <= shooting.settle_below_tolerances * options.temperature_tolerance) {
+                // Close to the answer: the next correction should be one that may judge it.
+                k = shooting.settle_cycles_per_map;
+                forcing = shooting.trusted_forcing;
+                previous_residual = 0.0; // a k-period residual is not comparable with the last
             }
             if (largest > shooting.max_step_K) dx *= shooting.max_step_K / largest;
             // New start: the end of the base cycles, its slow part moved to x + dx.

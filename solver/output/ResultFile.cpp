@@ -293,6 +293,9 @@ void writeRunResult(const std::string& path, const Machine& machine, const Stead
         std::vector<double> krylov(dg.krylov_iterations.begin(), dg.krylov_iterations.end());
         w.write("/solver/newton/residual", dg.newton_residual, "K");
         w.write("/solver/newton/krylov_iterations", krylov, "1");
+        w.write("/solver/newton/correction", dg.newton_correction, "K");
+        w.write("/solver/newton/periods_per_map",
+                std::vector<double>(dg.periods_per_map.begin(), dg.periods_per_map.end()), "1");
         std::size_t width = 0;
         for (const auto& f : dg.floquet) width = std::max(width, f.size());
         std::vector<double> modulus(dg.floquet.size() * width, 0.0), argument(modulus.size(), 0.0);
