@@ -12,6 +12,7 @@
 #include <sys/wait.h>
 
 #include "solver/components/Machine.hpp"
+#include "solver/cycle/ShootingNewton.hpp"
 #include "solver/cycle/SteadyStateSolver.hpp"
 #include "solver/input/CaseReader.hpp"
 #include "solver/output/Hdf5File.hpp"
@@ -58,6 +59,15 @@ void compare(const std::string& file)
     // Far fewer periods integrated, sensitivity periods included.
     CHECK(fast.outcome.diagnostics.cycle_equivalents * 10 <
           plain.outcome.diagnostics.cycle_equivalents);
+    // Only a correction from a settle map (several periods, tight solve) judges the answer,
+    // and the distance reported is that correction, within the tolerance.
+    const SolverDiagnostics& dg = fast.outcome.diagnostics;
+    REQUIRE_FALSE(dg.periods_per_map.empty());
+    CHECK(dg.periods_per_map.back() == ShootingOptions{}.settle_cycles_per_map);
+    CHECK(a.distance_estimate == dg.newton_correction.back());
+    CHECK(a.distance_estimate <= steadyOptionsFor(input::readCaseFile(
+                                     std::string(COLDTIP_TEST_DATA) + "/steady/" + file))
+                                     .temperature_tolerance);
 }
 
 } // namespace
