@@ -40,11 +40,11 @@ struct ShootingOptions {
     //! amplifies it by 1/(1 - mu^k) along the slowest mode (mu ~ 0.99985 on the fixed-
     //! temperature demo), where the signal k (1 - mu) d grows with k. Measured on that demo
     //! against a plain run continued 19,000 cycles past its own stop (largest solid
-    //! difference): one period per map 0.035-0.072 K (four runs), four 0.026 K from ambient
-    //! and 0.039 K from a start 0.066 K off, eight 0.004 K and 0.017 K, at 85-90 s instead
-    //! of 50-60 s (plain: about 1050 s).
+    //! difference): one period per map 0.035-0.072 K (four runs); four 0.026 K from ambient
+    //! and 0.039 K from a start 0.066 K off; eight 0.010 K (57 s) and 0.017 K from that start.
+    //! Plain integration: about 1050 s.
     int settle_cycles_per_map = 8;
-    double settle_below_tolerances = 20.0;
+    double settle_below_tolerances = 20.0; //!< switch to settle maps below this many tolerances
     int warmup_cycles = 10;     //!< plain cycles before the first Newton step
     int max_newton = 15;        //!< outer iterations
     int max_krylov = 120;       //!< GMRES iterations per Newton step (no restart)
