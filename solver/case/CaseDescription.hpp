@@ -250,6 +250,9 @@ struct CaseDescription {
     //! ("components[3].fill.wire_diameter", "links[0].between[1]"), so that later stages
     //! can point at any value, not only at a component.
     std::map<std::string, SourceMark> marks;
+    //! One-line warnings of the reader ("FILE:LINE:COL: warning: KEY: ..."): legitimate
+    //! input outside a model's published range (input/Plausibility.hpp).
+    std::vector<std::string> warnings;
 };
 
 } // namespace coldtip

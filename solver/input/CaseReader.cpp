@@ -1,8 +1,10 @@
 #include "solver/input/CaseReader.hpp"
 
+#include "models/correlations/PackedSpheres.hpp"
 #include "models/correlations/WovenScreen.hpp"
 #include "solver/input/ClosestName.hpp"
 #include "solver/input/MapReader.hpp"
+#include "solver/input/Plausibility.hpp"
 
 #include <algorithm>
 #include <cctype>
@@ -12,6 +14,7 @@
 #include <filesystem>
 #include <fmt/format.h>
 #include <fstream>
+#include <iostream>
 #include <sstream>
 #include <stdexcept>
 
@@ -142,7 +145,22 @@ void readPassage(const MapReader& m, ComponentSpec& c)
     c.cells = std::max(1, static_cast<int>(cells));
 }
 
-FillSpec readFill(const MapReader& component, const KindRow<Kind>& owner)
+// A fill's hydraulic diameter must fit in its passage: a larger one is a slip of unit
+// (hydraulic_diameter 50 mm in a 24 mm exchanger) that the correlations would take at face
+// value. `key` is the key that set it; `derived` says how, if it was not given.
+void checkFitsPassage(const MapReader& m, std::string_view key, double hydraulic_diameter,
+                      double diameter, const std::string& derived)
+{
+    if (hydraulic_diameter < diameter)
+        return;
+    m.fail(key,
+           fmt::format("the hydraulic diameter {}{:.4g} mm is not smaller than the passage's "
+                       "diameter {:.4g} mm",
+                       derived, hydraulic_diameter * 1e3, diameter * 1e3),
+           "a fill whose pores are smaller than the passage (check the units)");
+}
+
+FillSpec readFill(const MapReader& component, const KindRow<Kind>& owner, double diameter)
 {
     const MapReader selector = component.map("fill", {Table::Fill}, Unknown::Allow);
     const std::string kindName = selector.choice("kind");
@@ -172,19 +190,17 @@ FillSpec readFill(const MapReader& component, const KindRow<Kind>& owner)
     case FillKind::Slots:
         fill.porosity = m.quantity("porosity");
         fill.hydraulic_diameter = m.quantity("hydraulic_diameter");
+        checkFitsPassage(m, "hydraulic_diameter", fill.hydraulic_diameter, diameter, "");
         break;
     case FillKind::Screen: {
         fill.mesh = m.quantity("mesh");
         fill.wire_diameter = m.quantity("wire_diameter");
         fill.conduction_degradation = m.quantity("conduction_degradation");
-        if (const auto given = m.optionalQuantity("porosity")) {
-            fill.porosity = *given;
-            break;
-        }
-        fill.porosity =
-            models::WovenScreen::geometricPorosity(fill.mesh, fill.wire_diameter);
+        const auto given = m.optionalQuantity("porosity");
+        fill.porosity = given.value_or(
+            models::WovenScreen::geometricPorosity(fill.mesh, fill.wire_diameter));
         const Range& range = m.entry("porosity").range;
-        if (!range.contains(fill.porosity))
+        if (!given && !range.contains(fill.porosity))
             m.fail("mesh",
                    fmt::format("mesh {} with wire_diameter {} gives porosity "
                                "1 - pi mesh wire_diameter / 4 = {:.3g}, not {}",
@@ -192,12 +208,34 @@ FillSpec readFill(const MapReader& component, const KindRow<Kind>& owner)
                                fill.porosity, range.describe("", false)),
                    "a finer wire or a coarser mesh, pi mesh wire_diameter / 4 < 1 "
                    "(e.g. 400 in^-1 with 25 um)");
+        if (!given && fill.porosity > kMaxScreenPorosity)
+            m.fail("mesh",
+                   fmt::format("mesh {} with wire_diameter {} gives porosity "
+                               "1 - pi mesh wire_diameter / 4 = {:.3g}, above {:g}: no "
+                               "woven screen is that open",
+                               m.written("mesh"), m.written("wire_diameter"),
+                               fill.porosity, kMaxScreenPorosity),
+                   "a mesh in wires per inch, e.g. \"400 in^-1\", and a wire diameter "
+                   "in its unit, e.g. \"25 um\" (stacked screens: porosity 0.6-0.8)");
+        checkFitsPassage(
+            m, "wire_diameter",
+            models::WovenScreen(fill.mesh, fill.wire_diameter, fill.porosity)
+                .hydraulicDiameter(),
+            diameter,
+            fmt::format("porosity wire_diameter / (1 - porosity) = {:.3g} x {} / {:.3g} = ",
+                        fill.porosity, m.written("wire_diameter"), 1.0 - fill.porosity));
         break;
     }
     case FillKind::Spheres:
         fill.sphere_diameter = m.quantity("sphere_diameter");
         fill.porosity = m.quantity("porosity");
         fill.conduction_degradation = m.quantity("conduction_degradation");
+        checkFitsPassage(
+            m, "sphere_diameter",
+            models::PackedSpheres(fill.sphere_diameter, fill.porosity).hydraulicDiameter(),
+            diameter,
+            fmt::format("2 porosity sphere_diameter / (3 (1 - porosity)) of {} spheres = ",
+                        m.written("sphere_diameter")));
         break;
     case FillKind::Open: break;
     }
@@ -437,14 +475,14 @@ ComponentSpec readComponent(const Element& element, const ReadContext& context,
         break;
     case Kind::HeatExchanger:
         readPassage(m, c);
-        c.fill = readFill(m, row);
+        c.fill = readFill(m, row, c.diameter);
         c.wall = readExchangerWall(m, context, names, c.name, ambient);
         c.role = m.optionalChoice("role").value_or("");
         break;
     case Kind::Regenerator:
         readPassage(m, c);
         c.cell_clustering = m.quantity("cell_clustering");
-        c.fill = readFill(m, row);
+        c.fill = readFill(m, row, c.diameter);
         if (m.has("housing")) {
             const MapReader housing = m.map("housing");
             c.housing =
@@ -599,6 +637,34 @@ YAML::Node loadDocument(const std::string& text, const ReadContext& context)
 
 } // namespace
 
+// All components together hold at most kMaxTotalCells cells: the state vector (about four
+// states per cell: gas mass and energy, a mass flow, a solid temperature) and the sparse
+// Jacobian grow with them. Refused at the component with the most cells.
+void checkTotalCells(const MapReader& top, const std::vector<Element>& elements,
+                     const std::vector<ComponentSpec>& components)
+{
+    long total = 0;
+    std::size_t largest = 0;
+    for (std::size_t i = 0; i < components.size(); ++i) {
+        total += components[i].cells;
+        if (components[i].cells > components[largest].cells)
+            largest = i;
+    }
+    if (total <= kMaxTotalCells)
+        return;
+    const ComponentSpec& big = components[largest];
+    const std::string path = elements[largest].mark.path + ".cells";
+    const auto given = top.context().marks->find(path);
+    const SourceMark at = given != top.context().marks->end() ? given->second
+                                                              : elements[largest].mark;
+    top.context().fail(
+        at,
+        fmt::format("the components hold {} cells in all (about {} states; '{}' has {}), "
+                    "above the limit of {}",
+                    total, 4 * total, big.name, big.cells, kMaxTotalCells),
+        fmt::format("at most {} cells in all components together", kMaxTotalCells));
+}
+
 CaseDescription parseCaseText(const std::string& text, const std::string& pathForMessages)
 {
     CaseDescription c;
@@ -619,9 +685,17 @@ CaseDescription parseCaseText(const std::string& text, const std::string& pathFo
     c.frequency = top.quantity("frequency");
     c.drive = readDrive(top.map("drive"));
     NameBook names;
-    for (const Element& element : top.list("components"))
+    const std::vector<Element> components = top.list("components");
+    if (components.empty())
+        top.fail("components",
+                 "no components: a drive alone is not a machine (its gas has nowhere to go "
+                 "and nothing to exchange heat with)",
+                 "a list of at least one component, e.g. a regenerator, heat exchangers, a "
+                 "tube and a volume");
+    for (const Element& element : components)
         c.components.push_back(
             readComponent(element, context, names, c.gas.charge_temperature));
+    checkTotalCells(top, components, c.components);
     for (const Element& element : top.list("links"))
         c.links.push_back(readLink(element, context, names, c.components));
     c.solver = readSolver(top.map("solver"));
@@ -629,6 +703,7 @@ CaseDescription parseCaseText(const std::string& text, const std::string& pathFo
     c.initial.cold_temperature =
         top.map("initial").optionalQuantity("cold_temperature").value_or(0.0);
     c.cooldown = readCooldown(top.map("cooldown"));
+    c.warnings = checkPlausible(c);
     return c;
 }
 
@@ -654,7 +729,11 @@ CaseDescription readCaseFile(const std::string& path)
     text << in.rdbuf();
     if (in.bad())
         throw InputError(noPlace, "cannot read the case file", expected);
-    return parseCaseText(text.str(), path);
+    CaseDescription c = parseCaseText(text.str(), path);
+    // What is legitimate but outside a model's published range: one line each, once.
+    for (const std::string& line : c.warnings)
+        std::cerr << line << '\n';
+    return c;
 }
 
 } // namespace coldtip::input

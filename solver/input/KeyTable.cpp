@@ -43,6 +43,12 @@ struct Key {
         e.range = r;
         return *this;
     }
+    //! A bare number is refused: the trade's unit is not SI's (`why` says so).
+    Key& unit(std::string why)
+    {
+        e.unitNote = std::move(why);
+        return *this;
+    }
     Key& of(std::vector<Table> tables)
     {
         e.tables = std::move(tables);
@@ -93,21 +99,40 @@ Key map(std::string key, std::vector<Table> tables, std::string help)
 const Range kPositive = Range::above(0.0);
 const Range kFraction = Range::open(0.0, 1.0);
 
+// Plausible ranges of the physical keys: wide enough for every cryocooler and test rig
+// (4 K regenerators of lead or rare-earth spheres, small 20 K pulse tubes, 1-10 Hz valved
+// tubes, 300 K rigs, laboratory buffers of litres), narrow enough that a slip of unit or
+// exponent ("diameter: 1e-30 m", "temperature: 5000 K") is refused at its key instead of
+// being integrated for minutes. In SI.
+const Range kTemperature = Range::aboveUpTo(0.0, 1000.0);  // [K] absolute
+const Range kTemperatureDifference = Range::aboveUpTo(0.0, 100.0); // [K] tolerances
+const Range kDiameter = Range::closed(1e-6, 10.0);         // [m] bores, wires, spheres
+const Range kLength = Range::closed(1e-6, 100.0);          // [m] flow paths, straps
+const Range kThickness = Range::closed(1e-6, 1.0);         // [m] walls
+const Range kArea = Range::closed(1e-12, 100.0);           // [m^2]
+const Range kVolume = Range::closed(1e-12, 100.0);         // [m^3]
+const Range kFrequency = Range::closed(1e-3, 1e4);         // [Hz]
+const Range kPressure = Range::closed(1e3, 1e8);           // [Pa]
+const Range kMass = Range::aboveUpTo(0.0, 1e4);            // [kg]
+const Range kMesh = Range::closed(100.0, 1e6);             // [1/m] 2.5 to 25 400 per inch
+
 Key nameKey()
 {
     return text("name", "unique name (no '.' or whitespace), used by links").req();
 }
 Key lengthKey()
 {
-    return quantity("length", D::Length, kPositive, "flow length").req();
+    return quantity("length", D::Length, kLength, "flow length").req();
 }
 Key diameterKey()
 {
-    return quantity("diameter", D::Length, kPositive, "inner (frontal) diameter").req();
+    return quantity("diameter", D::Length, kDiameter, "inner (frontal) diameter").req();
 }
 Key cellsKey(std::string byDefault)
 {
-    return integer("cells", Range::atLeast(1), "number of control volumes")
+    return integer("cells", Range::closed(1, kMaxTotalCells),
+                   "number of control volumes (all components together at most " +
+                       std::to_string(kMaxTotalCells) + ")")
         .def(byDefault);
 }
 Key clusteringKey()
@@ -128,15 +153,15 @@ Key materialKey(std::string help)
 }
 Key thicknessKey(std::string help)
 {
-    return quantity("thickness", D::Length, kPositive, std::move(help)).req();
+    return quantity("thickness", D::Length, kThickness, std::move(help)).req();
 }
 Key temperatureKey(std::string help)
 {
-    return quantity("temperature", D::Temperature, kPositive, std::move(help)).req();
+    return quantity("temperature", D::Temperature, kTemperature, std::move(help)).req();
 }
 Key orificeKey()
 {
-    return quantity("orifice_diameter", D::Length, kPositive, "bore").req();
+    return quantity("orifice_diameter", D::Length, kDiameter, "bore").req();
 }
 Key dischargeKey()
 {
@@ -157,7 +182,7 @@ Key porosityKey(std::string help)
 }
 Key ambientKey()
 {
-    return quantity("ambient_temperature", D::Temperature, kPositive,
+    return quantity("ambient_temperature", D::Temperature, kTemperature,
                     "temperature of the warm surroundings")
         .rule("gas.charge_temperature");
 }
@@ -177,7 +202,7 @@ std::vector<KeyTable> buildTables()
          {text("case", "name of the case, used in reports and result files").req(),
           text("description", "free text about the case"),
           map("gas", {Table::Gas}, "working gas and its charge").req(),
-          quantity("frequency", D::Frequency, kPositive, "operating frequency").req(),
+          quantity("frequency", D::Frequency, kFrequency, "operating frequency").req(),
           map("drive", {Table::Drive}, "what moves the gas").req(),
           Key("components", V::List, "the main flow path, from the drive outward")
               .of({Table::Component})
@@ -191,19 +216,19 @@ std::vector<KeyTable> buildTables()
          "gas",
          "Working gas and the charge that fills the machine.",
          {oneOf("species", models::knownGasSpecies(), "working gas").req(),
-          quantity("charge_pressure", D::Pressure, kPositive,
+          quantity("charge_pressure", D::Pressure, kPressure,
                    "pressure when filled at charge_temperature")
               .req(),
-          quantity("charge_temperature", D::Temperature, kPositive,
+          quantity("charge_temperature", D::Temperature, kTemperature,
                    "temperature of the gas when charged")
               .req()}},
         {Table::Drive,
          "drive",
          "Prescribed sinusoidal piston x(t) = amplitude sin(2 pi f t), positive inward.",
          {oneOf("kind", {"piston"}, "type of drive").req(),
-          quantity("bore", D::Length, kPositive, "piston diameter").req(),
-          quantity("amplitude", D::Length, kPositive, "half the stroke").req(),
-          quantity("dead_volume", D::Volume, kPositive, "volume at full compression")
+          quantity("bore", D::Length, kDiameter, "piston diameter").req(),
+          quantity("amplitude", D::Length, kDiameter, "half the stroke").req(),
+          quantity("dead_volume", D::Volume, kVolume, "volume at full compression")
               .req(),
           map("wall", {Table::DriveWall}, "compression-space wall; absent: adiabatic")}},
         {Table::DriveWall,
@@ -250,9 +275,9 @@ std::vector<KeyTable> buildTables()
          "One solid node of the given mass under an applied load (a cold head); "
          "not together with temperature.",
          {materialKey("body material").req(),
-          quantity("mass", D::Mass, kPositive, "body mass").req(),
+          quantity("mass", D::Mass, kMass, "body mass").req(),
           quantity("load", D::Power, Range{}, "heat applied to the body").def("0"),
-          quantity("initial_temperature", D::Temperature, kPositive,
+          quantity("initial_temperature", D::Temperature, kTemperature,
                    "starting temperature; absent: from the initial profile"),
           Key("bodies", V::List,
               "further lumped bodies of the cold head, each linked to this one or another")
@@ -265,8 +290,8 @@ std::vector<KeyTable> buildTables()
          "A further lumped body of the cold head (a cold block, a detector mount): one "
          "temperature, heat capacity mass c_p(T) of its material.",
          {nameKey(), materialKey("body material").req(),
-          quantity("mass", D::Mass, kPositive, "body mass").req(),
-          quantity("initial_temperature", D::Temperature, kPositive,
+          quantity("mass", D::Mass, kMass, "body mass").req(),
+          quantity("initial_temperature", D::Temperature, kTemperature,
                    "starting temperature; absent: the exchanger body's"),
           map("link", {Table::BodyLink}, "how it conducts to the rest of the cold head")
               .req()}},
@@ -279,8 +304,8 @@ std::vector<KeyTable> buildTables()
           quantity("conductance", D::ThermalConductance, kPositive,
                    "constant conductance (a bolted joint); not with material"),
           materialKey("strap material; with length and area"),
-          quantity("length", D::Length, kPositive, "strap length"),
-          quantity("area", D::Area, kPositive, "strap cross-section")}},
+          quantity("length", D::Length, kLength, "strap length"),
+          quantity("area", D::Area, kArea, "strap cross-section")}},
         {Table::ColdLoad,
          "loads[i] of a lumped heat-exchanger wall, every kind",
          "A heat load on a cold-head body; the kind selects its other keys.",
@@ -305,14 +330,14 @@ std::vector<KeyTable> buildTables()
          "load with kind: table",
          "A load tabulated against the body's temperature: linear between the points "
          "(continuous, its slope jumps at them), the end values held outside.",
-         {quantities("temperatures", D::Temperature, kPositive,
+         {quantities("temperatures", D::Temperature, kTemperature,
                      "body temperatures, increasing")
               .req(),
           powersKey("heat into the body at those temperatures")}},
         {Table::LoadRadiation,
          "load with kind: radiation",
          "Radiation from a surrounding surface at ambient: Q = sigma eps area (T_amb^4 - T^4).",
-         {quantity("area", D::Area, kPositive, "radiating surface of the body").req(),
+         {quantity("area", D::Area, kArea, "radiating surface of the body").req(),
           quantity("emissivity", D::Dimensionless, Range::aboveUpTo(0.0, 1.0),
                    "effective emissivity of the bare body")
               .rule("required without mli_emissivity"),
@@ -325,8 +350,8 @@ std::vector<KeyTable> buildTables()
          "Conduction through supports from ambient: Q = count (area/length) integral_T^T_amb "
          "k dT of the NIST fit.",
          {materialKey("support material").req(),
-          quantity("length", D::Length, kPositive, "support length").req(),
-          quantity("area", D::Area, kPositive, "cross-section of one support").req(),
+          quantity("length", D::Length, kLength, "support length").req(),
+          quantity("area", D::Area, kArea, "cross-section of one support").req(),
           integer("count", Range::atLeast(1), "identical supports in parallel").def("1"),
           ambientKey()}},
         {Table::Regenerator,
@@ -353,7 +378,7 @@ std::vector<KeyTable> buildTables()
         {Table::Volume,
          "components[i] with kind: volume",
          "A lumped gas volume (reservoir, buffer, compliance).",
-         {quantity("volume", D::Volume, kPositive, "gas volume").req()}},
+         {quantity("volume", D::Volume, kVolume, "gas volume").req()}},
         {Table::Orifice,
          "components[i] with kind: orifice",
          "A resistive restriction in the main path.",
@@ -366,24 +391,27 @@ std::vector<KeyTable> buildTables()
          "fill with kind: slots",
          "Parallel slots or channels.",
          {porosityKey("open fraction of the frontal area").req(),
-          quantity("hydraulic_diameter", D::Length, kPositive,
-                   "4 flow area / wetted perimeter")
+          quantity("hydraulic_diameter", D::Length, kDiameter,
+                   "4 flow area / wetted perimeter; below the passage's diameter")
               .req(),
           materialKey("fin material")}},
         {Table::FillScreen,
          "fill with kind: screen",
          "Stacked square-weave woven screens.",
          {materialKey("screen material; required in a regenerator"),
-          quantity("mesh", D::InverseLength, kPositive, "wires per unit length").req(),
-          quantity("wire_diameter", D::Length, kPositive, "wire diameter").req(),
+          quantity("mesh", D::InverseLength, kMesh, "wires per unit length")
+              .unit("screens are counted in wires per inch, SI in wires per metre")
+              .req(),
+          quantity("wire_diameter", D::Length, kDiameter, "wire diameter").req(),
           porosityKey("overrides the porosity computed from mesh and wire")
-              .rule("1 - pi mesh wire_diameter / 4"),
+              .rule("1 - pi mesh wire_diameter / 4, at most " +
+                    fmt::format("{:g}", kMaxScreenPorosity)),
           degradationKey("0.1")}},
         {Table::FillSpheres,
          "fill with kind: spheres",
          "A packed bed of spheres.",
          {materialKey("sphere material; required in a regenerator"),
-          quantity("sphere_diameter", D::Length, kPositive, "sphere diameter").req(),
+          quantity("sphere_diameter", D::Length, kDiameter, "sphere diameter").req(),
           porosityKey("void fraction of the bed").def("0.38"), degradationKey("0.02")}},
         {Table::Link,
          "links[i]",
@@ -425,8 +453,10 @@ std::vector<KeyTable> buildTables()
           quantity("energy_residual", D::Dimensionless, kFraction,
                    "|energy balance error| / PV power")
               .def("2e-3"),
-          quantity("temperature_tolerance", D::Temperature, kPositive,
-                   "estimated distance of any temperature from the steady state (in K)")
+          quantity("temperature_tolerance", D::TemperatureDifference,
+                   kTemperatureDifference,
+                   "estimated distance of any temperature from the steady state (a "
+                   "difference: 0.05 degC is 0.05 K)")
               .def("0.05 K"),
           integer("max_cycles", Range::atLeast(1), "give up after this many cycles")
               .def("20000"),
@@ -442,22 +472,22 @@ std::vector<KeyTable> buildTables()
          "initial",
          "The initial temperature profile.",
          {quantity(
-             "cold_temperature", D::Temperature, kPositive,
+             "cold_temperature", D::Temperature, kTemperature,
              "cold-end start; absent: the cold exchanger's wall or body temperature")}},
         {Table::Cooldown,
          "cooldown",
          "The cooldown transient of `coldtip cooldown`: from a uniform start until the cold "
          "end settles or the time limit.",
-         {quantity("start_temperature", D::Temperature, kPositive,
+         {quantity("start_temperature", D::Temperature, kTemperature,
                    "uniform temperature of the whole machine at the start")
               .rule("the reject exchanger's wall temperature"),
           quantity("time_limit", D::Time, kPositive, "longest physical time simulated")
               .def("14400 s"),
-          quantities("report_at", D::Temperature, kPositive,
+          quantities("report_at", D::Temperature, kTemperature,
                      "cold-end temperatures whose times are reported"),
-          quantity("settle_tolerance", D::Temperature, kPositive,
-                   "settled: estimated distance of the cold end from its steady state "
-                   "(in K)")
+          quantity("settle_tolerance", D::TemperatureDifference, kTemperatureDifference,
+                   "settled: estimated distance of the cold end from its steady state (a "
+                   "difference: 0.1 degF is 0.056 K)")
               .def("0.05 K"),
           oneOf("method", {"accelerated", "plain"},
                 "accelerated: averaged slow temperature equation; plain: every cycle")
@@ -493,8 +523,9 @@ std::string valueColumn(const KeyEntry& e)
     case V::Quantity:
         return describe(e.dimension).siUnit.empty()
                    ? std::string("number")
-                   : fmt::format("{} [{}]", describe(e.dimension).name,
-                                 describe(e.dimension).siUnit);
+                   : fmt::format("{} [{}]{}", describe(e.dimension).name,
+                                 describe(e.dimension).siUnit,
+                                 e.unitNote.empty() ? "" : ", unit required");
     case V::Integer: return "integer";
     case V::String: return "string";
     case V::Enum: return "one of " + joinWords(e.choices, "`");
@@ -605,7 +636,15 @@ std::string keyReferenceMarkdown()
         "A quantity is a bare number in SI units or a string \"<number> <unit>\" (\"20 "
         "mm\", "
         "\"3.1 MPa\", \"27 degC\"); units are read by udunits2. Unknown keys are errors. "
-        "Ranges are in SI units.\n";
+        "Ranges are in SI units.\n\n"
+        "A *temperature* is absolute (27 degC is 300.15 K); a *temperature difference* (the "
+        "tolerances) converts by the unit's scale only (0.05 degC is 0.05 K, 0.1 degF is "
+        "0.056 K). A key marked *unit required* refuses a bare number because its trade "
+        "unit is not SI's (screen mesh is counted per inch). A frequency is in Hz: an "
+        "angular unit (rad/s) is refused, since udunits2 counts the radian as 1. "
+        "udunits2's origin-shift and logarithmic syntax (\"85 K @ 1000\", \"since\", "
+        "\"lg(re 1 W)\") is refused. All components together hold at most " +
+        std::to_string(kMaxTotalCells) + " cells.\n";
     for (const KeyTable& table : keyTables()) {
         md += fmt::format("\n### {}\n\n{}\n\n", table.title, table.summary);
         md += "| key | value | required | default | allowed | meaning |\n"

@@ -96,7 +96,20 @@ struct KeyEntry {
     std::vector<std::string> choices; //!< enums
     std::vector<Table> tables;        //!< maps: their table(s); lists: their elements'
     std::string help;
+    //! Quantities: why a bare number is refused (the trade's unit is not SI's, so a bare
+    //! number is ambiguous); empty: a bare number is taken as SI.
+    std::string unitNote;
 };
+
+//! Most cells (control volumes) of all components together: the state vector grows with
+//! about four states per cell, and past this the run takes hours and the sparse Jacobian
+//! gigabytes, so a slip ("cells: 1e9") is refused at once instead of allocated.
+inline constexpr int kMaxTotalCells = 20000;
+
+//! Highest screen porosity accepted from mesh and wire diameter: stacked square-weave
+//! screens lie between about 0.6 and 0.8 (Gedeon and Wood, NASA CR-198442, 1996); above
+//! 0.95 the mesh or the wire was almost surely given in the wrong unit.
+inline constexpr double kMaxScreenPorosity = 0.95;
 
 //! The declared keys of one kind of map.
 struct KeyTable {

@@ -49,6 +49,20 @@ bool isWhole(std::string_view text, const char* end)
     return end == text.data() + text.size();
 }
 
+// "is out of range (too large)": which side of `range` the value `x` fell on.
+std::string outOfRange(const Range& range, double x)
+{
+    return x > range.lo ? "is out of range (too large)" : "is out of range (too small)";
+}
+
+// What one entry of a list of quantities must be.
+std::string entryExpectation(const KeyEntry& list)
+{
+    KeyEntry one = list;
+    one.kind = ValueKind::Quantity;
+    return fmt::format("{} as each entry of {}", expectation(one), list.key);
+}
+
 } // namespace
 
 SourceMark ReadContext::at(const YAML::Mark& mark, std::string path) const
@@ -197,8 +211,19 @@ double MapReader::convert(const KeyEntry& e, const Scalar& s) const
     } catch (const UnitError& error) {
         m_context.fail(s.mark, error.what(), expectedQuantity(e.dimension));
     }
+    if (q.unit.empty() && !e.unitNote.empty()) {
+        const DimensionInfo& d = describe(e.dimension);
+        m_context.fail(s.mark,
+                       fmt::format("'{}' has no unit: a bare number is read in SI ({}), "
+                                   "but {}",
+                                   s.text, d.siUnit, e.unitNote),
+                       fmt::format("{} {} with its unit, e.g. \"{}\"", d.article, d.name,
+                                   d.example));
+    }
     if (!e.range.contains(q.value))
-        m_context.fail(s.mark, shown(s.text, q, e.dimension) + " is out of range",
+        m_context.fail(s.mark,
+                       fmt::format("{} {}", shown(s.text, q, e.dimension),
+                                   outOfRange(e.range, q.value)),
                        expectation(e));
     return q.value;
 }
@@ -221,7 +246,7 @@ std::vector<double> MapReader::quantities(std::string_view key) const
     std::vector<double> values;
     for (const Element& element : list(key))
         values.push_back(convert(
-            e, {scalarText(element.node, element.mark, m_context, expectation(e)),
+            e, {scalarText(element.node, element.mark, m_context, entryExpectation(e)),
                 element.mark}));
     return values;
 }
@@ -240,7 +265,9 @@ std::optional<int> MapReader::optionalInteger(std::string_view key) const
     const auto [end, ec] =
         std::from_chars(digits.data(), digits.data() + digits.size(), value);
     if (ec == std::errc::result_out_of_range)
-        m_context.fail(s->mark, fmt::format("{} is out of range", s->text),
+        m_context.fail(s->mark,
+                       fmt::format("{} {}", s->text,
+                                   outOfRange(e.range, digits.front() == '-' ? -1e300 : 1e300)),
                        expectation(e));
     if (ec != std::errc() || !isWhole(digits, end)) {
         // Whole numbers written as reals ("2e4", "20.0") are accepted; 2.5 is not.
@@ -255,13 +282,15 @@ std::optional<int> MapReader::optionalInteger(std::string_view key) const
             m_context.fail(s->mark, fmt::format("{} is not an integer", s->text),
                            expectation(e));
         if (std::fabs(real) > 9e15)
-            m_context.fail(s->mark, fmt::format("{} is out of range", s->text),
+            m_context.fail(s->mark, fmt::format("{} {}", s->text, outOfRange(e.range, real)),
                            expectation(e));
         value = static_cast<long long>(real);
     }
     if (!e.range.contains(static_cast<double>(value)) || value < INT_MIN ||
         value > INT_MAX)
-        m_context.fail(s->mark, fmt::format("{} is out of range", s->text),
+        m_context.fail(s->mark,
+                       fmt::format("{} {}", s->text,
+                                   outOfRange(e.range, static_cast<double>(value))),
                        expectation(e));
     return static_cast<int>(value);
 }

@@ -51,6 +51,7 @@ public:
               std::vector<Table> tables, UnknownKeys unknown = UnknownKeys::Reject);
 
     const SourceMark& mark() const { return m_mark; }
+    const ReadContext& context() const { return m_context; }
     bool has(std::string_view key) const;
     //! Where the value of `key` is; the map's own place (with the key's path) if absent.
     SourceMark markOf(std::string_view key) const;

@@ -2,9 +2,14 @@
 
 #include <udunits2.h>
 
+#include <cctype>
+#include <numbers>
 #include <charconv>
 #include <cmath>
+#include <cstdlib>
 #include <fmt/format.h>
+#include <limits>
+#include <vector>
 
 namespace coldtip::input {
 
@@ -22,6 +27,7 @@ constexpr DimensionRow kDimensions[nDimensions] = {
     {{"volume", "a", "m^3", "250 cm^3"}, "m^3"},
     {{"pressure", "a", "Pa", "3.1 MPa"}, "Pa"},
     {{"temperature", "a", "K", "300 K"}, "K"},
+    {{"temperature difference", "a", "K", "0.05 K"}, "K"},
     {{"frequency", "a", "Hz", "55 Hz"}, "Hz"},
     {{"time", "a", "s", "20 ms"}, "s"},
     {{"mass", "a", "kg", "0.3 kg"}, "kg"},
@@ -44,6 +50,69 @@ std::string_view trim(std::string_view s)
 struct ConverterDeleter {
     void operator()(cv_converter* converter) const { cv_free(converter); }
 };
+
+bool isIdentifierByte(char c)
+{
+    const auto u = static_cast<unsigned char>(c);
+    return std::isalpha(u) || c == '_' || u >= 0x80; // UTF-8 bytes: "°", "µ"
+}
+
+// The names in a unit's spelling ("rad", "s" in "rad/s"), in order.
+std::vector<std::string> identifiers(std::string_view unit)
+{
+    std::vector<std::string> words;
+    for (std::size_t i = 0; i < unit.size();) {
+        if (!isIdentifierByte(unit[i])) {
+            ++i;
+            continue;
+        }
+        std::size_t end = i;
+        while (end < unit.size() &&
+               (isIdentifierByte(unit[end]) ||
+                std::isdigit(static_cast<unsigned char>(unit[end]))))
+            ++end;
+        words.emplace_back(unit.substr(i, end - i));
+        i = end;
+    }
+    return words;
+}
+
+// udunits2's grammar also shifts a unit's origin ("K @ 1000", "s since 2020-01-01", with
+// '@', "after", "from", "since" or "ref") and reads logarithmic units ("lg(re 1 mW)")
+// (UDUNITS-2 C API Guide, "Unit Syntax"). A case file means neither: each would move the
+// value silently ("85 K @ 1000" is 1085 K). A unit starting with a number is a scale
+// factor ("85 1000 K" is 85000 K), never what was meant either.
+void refuseUnitSyntax(std::string_view unit)
+{
+    if (unit.empty())
+        return;
+    if (unit.find('@') != std::string_view::npos)
+        throw UnitError(fmt::format(
+            "'{}' shifts the unit's origin ('@' is udunits2's offset syntax: \"85 K @ "
+            "1000\" would be 1085 K), which case files do not accept",
+            unit));
+    for (const std::string& word : identifiers(unit)) {
+        std::string lower = word;
+        for (char& c : lower)
+            c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+        if (lower == "since" || lower == "after" || lower == "from" || lower == "ref")
+            throw UnitError(fmt::format(
+                "'{}' shifts the unit's origin ('{}' is udunits2's offset syntax, as in "
+                "timestamps), which case files do not accept",
+                unit, word));
+        if (lower == "re")
+            throw UnitError(fmt::format(
+                "'{}' is a logarithmic unit (udunits2's \"lg(re ...)\" syntax), which "
+                "case files do not accept",
+                unit));
+    }
+    const auto first = static_cast<unsigned char>(unit.front());
+    if (std::isdigit(first) || first == '.' || first == '+' || first == '-')
+        throw UnitError(fmt::format(
+            "the unit '{}' starts with a number (udunits2 would take it as a scale factor "
+            "and multiply the value by it)",
+            unit));
+}
 
 } // namespace
 
@@ -123,9 +192,28 @@ std::string UnitConverter::dimensionOf(const ut_unit* unit) const
     return fmt::format("of dimension {}", definition);
 }
 
+void UnitConverter::refuseDimensionlessFactor(double value, std::string_view unit,
+                                              double perSecond) const
+{
+    // udunits2 counts the radian (and every other angle or ratio) as the number 1, so
+    // "345.6 rad/s" converts to 345.6 Hz although it is 55.0 Hz: an angular frequency
+    // omega = 2 pi f. Refuse any dimensionless name in a frequency's unit.
+    for (const std::string& word : identifiers(unit)) {
+        const UnitPtr part(ut_parse(m_system.get(), word.c_str(), UT_UTF8));
+        if (part && ut_are_convertible(part.get(), siUnit(Dimension::Dimensionless)))
+            throw UnitError(fmt::format(
+                "'{}' holds '{}', an angle or a ratio that udunits2 counts as the number "
+                "1, so {:g} {} would be read as {:g} Hz; give the frequency in Hz (if '{}' "
+                "is an angle, {:g} {} is {:#.4g} Hz = omega / (2 pi))",
+                unit, word, value, unit, perSecond, word, value, unit,
+                perSecond / (2.0 * std::numbers::pi)));
+    }
+}
+
 double UnitConverter::toSi(double value, std::string_view unit, Dimension dimension) const
 {
     const std::lock_guard lock(m_mutex);
+    refuseUnitSyntax(trim(unit));
     const UnitPtr from = parseUnit(unit);
     if (!ut_are_convertible(from.get(), siUnit(dimension)))
         throw UnitError(fmt::format("the unit '{}' is {}, not {} {}", trim(unit),
@@ -136,7 +224,13 @@ double UnitConverter::toSi(double value, std::string_view unit, Dimension dimens
     if (!converter)
         throw UnitError(fmt::format("cannot convert '{}' to {}", trim(unit),
                                     describe(dimension).siUnit));
-    const double si = cv_convert_double(converter.get(), value);
+    if (dimension == Dimension::Frequency)
+        refuseDimensionlessFactor(value, trim(unit), cv_convert_double(converter.get(), value));
+    // A difference keeps the unit's scale and drops its offset: cv(value) - cv(0).
+    const double si = dimension == Dimension::TemperatureDifference
+                          ? cv_convert_double(converter.get(), value) -
+                                cv_convert_double(converter.get(), 0.0)
+                          : cv_convert_double(converter.get(), value);
     if (!std::isfinite(si))
         throw UnitError(
             fmt::format("{} {} is not a finite number in SI", value, trim(unit)));
@@ -155,6 +249,19 @@ Quantity UnitConverter::parse(std::string_view text, Dimension dimension) const
         std::from_chars(digits.data(), digits.data() + digits.size(), value);
     const bool doubleSign =
         written.front() == '+' && !digits.empty() && digits.front() == '-';
+    if (ec == std::errc::result_out_of_range && !doubleSign) {
+        // from_chars leaves `value` unset here; strtod tells overflow from underflow.
+        const std::string number(digits.data(), end);
+        const bool overflow = std::fabs(std::strtod(number.c_str(), nullptr)) > 1.0;
+        if (overflow)
+            throw UnitError(fmt::format(
+                "'{}' is beyond the range of a double (magnitude above {:g})", number,
+                std::numeric_limits<double>::max()));
+        throw UnitError(fmt::format(
+            "'{}' is too small in magnitude for a double (it would round to 0); write 0 "
+            "or use a smaller unit",
+            number));
+    }
     if (ec != std::errc() || doubleSign)
         throw UnitError(fmt::format("'{}' is not a number", written));
     if (!std::isfinite(value))

@@ -18,13 +18,17 @@ struct ut_system;
 
 namespace coldtip::input {
 
-//! The physical dimensions a case-file quantity can have.
+//! The physical dimensions a case-file quantity can have (the order is that of the table in
+//! UnitConverter.cpp).
 enum class Dimension {
     Length,        //!< [m]
     Area,          //!< [m^2]
     Volume,        //!< [m^3]
     Pressure,      //!< [Pa]
     Temperature,   //!< [K] absolute; "degC" and "degF" convert with their offset
+    //! [K] a difference of temperatures (a tolerance): converted by the unit's scale only,
+    //! so that 0.05 degC is 0.05 K and 0.1 degF is 0.0556 K, not 273.2 K or 255.4 K
+    TemperatureDifference,
     Frequency,     //!< [Hz]
     Time,          //!< [s]
     Mass,          //!< [kg]
@@ -76,7 +80,12 @@ public:
 
     //! `text` as written in a case file ("20 mm", "1e-3", "27 degC") in the SI unit of
     //! `dimension`: value_SI = cv(value) with cv the udunits2 converter unit -> SI unit
-    //! (affine for temperatures). A bare number is SI. Throws UnitError.
+    //! (affine for temperatures; cv(value) - cv(0) for a temperature difference). A bare
+    //! number is SI. Refused (UnitError): udunits2's origin-shift and logarithmic syntax
+    //! ("85 K @ 1000", "s since 2020-01-01", "lg(re 1 W)"), a unit that starts with a
+    //! number ("85 1000 K"), a dimensionless factor in a frequency ("rad/s": udunits2
+    //! counts the radian as 1, so it would read 345.6 rad/s as 345.6 Hz), and numbers
+    //! beyond the range of a double.
     Quantity parse(std::string_view text, Dimension dimension) const;
 
     //! `value` in `unit` converted to the SI unit of `dimension`. Throws UnitError.
@@ -102,6 +111,10 @@ private:
     //! "a mass" if `unit` has one of the known dimensions, else its SI definition.
     std::string dimensionOf(const ut_unit* unit) const;
     const ut_unit* siUnit(Dimension dimension) const;
+    //! UnitError if a name in `unit` (a frequency's) is dimensionless, e.g. "rad" in
+    //! "rad/s"; `perSecond` is `value` as udunits2 converts it. Caller holds m_mutex.
+    void refuseDimensionlessFactor(double value, std::string_view unit,
+                                   double perSecond) const;
 
     // Declared first so that it is destroyed last, after the units that belong to it.
     std::unique_ptr<ut_system, SystemDeleter> m_system;

@@ -240,11 +240,13 @@ TEST_CASE("the other wall, fill and component forms", "[input]")
             validWith("max_cycles: 5000}", "max_cycles: 2e4}"), "real.yaml");
         CHECK(c.solver.steady.max_cycles == 20000);
     }
-    SECTION("an empty component list is allowed")
+    SECTION("an empty component list is refused: a drive alone is no machine")
     {
         std::string text = validText();
         text = text.substr(0, text.find("components:")) + "components: []\n" +
                text.substr(text.find("solver:"));
-        CHECK(parseCaseText(text, "empty-path.yaml").components.empty());
+        CHECK_THROWS_WITH(parseCaseText(text, "empty-path.yaml"),
+                          Catch::StartsWith("empty-path.yaml:14:13: error: components: no "
+                                            "components: a drive alone is not a machine"));
     }
 }

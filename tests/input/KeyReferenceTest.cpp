@@ -24,9 +24,14 @@ TEST_CASE("the Markdown key reference lists every declared key", "[input]")
         }
     }
     CHECK(nKeys > 80);
-    CHECK_THAT(md, Catch::Contains("| `wire_diameter` | length [m] | yes |  | > 0 m | "));
-    CHECK_THAT(md,
-               Catch::Contains("| `cells` | integer |  | ceil(length / 40 mm) | >= 1 |"));
+    CHECK_THAT(md, Catch::Contains(
+                       "| `wire_diameter` | length [m] | yes |  | in [1e-06, 10] m | "));
+    CHECK_THAT(md, Catch::Contains(
+                       "| `cells` | integer |  | ceil(length / 40 mm) | from 1 to 20000 |"));
+    // A difference and a key whose trade unit is not SI say so in the reference.
+    CHECK_THAT(md, Catch::Contains("| `temperature_tolerance` | temperature difference [K] |"));
+    CHECK_THAT(md, Catch::Contains("| `settle_tolerance` | temperature difference [K] |"));
+    CHECK_THAT(md, Catch::Contains("| `mesh` | inverse length [1/m], unit required | yes |"));
     CHECK_THAT(md, Catch::Contains(
                        "| `samples_per_cycle` | integer |  | 96 | from 8 to 4096 |"));
 }
@@ -63,9 +68,9 @@ TEST_CASE("ranges and expectations read as the messages say", "[input]")
     CHECK(Range::aboveUpTo(0, 1).contains(1.0));
     CHECK_FALSE(Range::above(0).contains(0.0));
     CHECK(expectation(*keyTable(Table::FillScreen).find("mesh")) ==
-          "an inverse length > 0 1/m");
+          "an inverse length in [100, 1e+06] 1/m");
     CHECK(expectation(*keyTable(Table::Gas).find("charge_temperature")) ==
-          "a temperature > 0 K");
+          "a temperature in (0, 1000] K");
 }
 
 TEST_CASE("did-you-mean suggests only close names", "[input]")

@@ -92,3 +92,51 @@ TEST_CASE("the unit system is shared safely between threads", "[input]")
     for (double r : results)
         CHECK(r == Approx(200 * 2.5e-4));
 }
+
+TEST_CASE("udunits2 syntax that would silently move a value is refused", "[input]")
+{
+    const UnitConverter& units = UnitConverter::instance();
+    // Origin shifts and logarithmic units (UDUNITS-2 C API Guide, "Unit Syntax").
+    CHECK_THROWS_WITH(units.parse("85 K @ 1000", Dimension::Temperature),
+                      Catch::Contains("shifts the unit's origin ('@'"));
+    for (const char* shifted : {"85 K since 1000", "85 K after 10", "85 K from 10",
+                                "85 K ref 10", "20 s since 2020-01-01T00:00:00"})
+        CHECK_THROWS_WITH(units.parse(shifted, Dimension::Temperature),
+                          Catch::Contains("is udunits2's offset syntax"));
+    CHECK_THROWS_WITH(units.parse("3 lg(re 1 W)", Dimension::Power),
+                      Catch::Contains("is a logarithmic unit"));
+    // A number in front of the unit is a scale factor: "85 1000 K" would be 85 000 K.
+    CHECK_THROWS_WITH(units.parse("85 1000 K", Dimension::Temperature),
+                      Catch::Contains("starts with a number"));
+    // udunits2 counts the radian as 1; omega = 2 pi f: 345.6 rad/s is 55.00 Hz.
+    CHECK_THROWS_WITH(units.parse("345.6 rad/s", Dimension::Frequency),
+                      Catch::Contains("would be read as 345.6 Hz") &&
+                          Catch::Contains("345.6 rad/s is 55.00 Hz"));
+    CHECK_THROWS_WITH(units.parse("20000 degree/s", Dimension::Frequency),
+                      Catch::Contains("'degree'"));
+    CHECK(units.parse("0.055 kHz", Dimension::Frequency).value == Approx(55.0));
+    // Beyond a double: the message says so instead of "not a number".
+    CHECK_THROWS_WITH(units.parse("1e400 Pa", Dimension::Pressure),
+                      "'1e400' is beyond the range of a double (magnitude above "
+                      "1.79769e+308)");
+    CHECK_THROWS_WITH(units.parse("-1e400", Dimension::Pressure),
+                      Catch::Contains("beyond the range of a double"));
+    CHECK_THROWS_WITH(units.parse("1e-400 m", Dimension::Length),
+                      Catch::Contains("too small in magnitude for a double"));
+}
+
+TEST_CASE("a temperature difference has no offset", "[input]")
+{
+    // A step of 1 degC is 1 K, of 1 degF 5/9 K (NIST SP 811, 2008, appendix B.8).
+    const UnitConverter& units = UnitConverter::instance();
+    CHECK(units.parse("0.05 degC", Dimension::TemperatureDifference).value ==
+          Approx(0.05).epsilon(1e-12));
+    CHECK(units.parse("0.1 degF", Dimension::TemperatureDifference).value ==
+          Approx(0.1 * 5.0 / 9.0).epsilon(1e-12));
+    CHECK(units.parse("50 mK", Dimension::TemperatureDifference).value ==
+          Approx(0.05).epsilon(1e-12));
+    CHECK(units.parse("0.05 degC", Dimension::Temperature).value ==
+          Approx(273.2).epsilon(1e-12));
+    CHECK_THROWS_WITH(units.parse("0.05 m", Dimension::TemperatureDifference),
+                      "the unit 'm' is a length, not a temperature difference");
+}
