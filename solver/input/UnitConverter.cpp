@@ -180,10 +180,19 @@ UnitConverter::UnitPtr UnitConverter::parseUnit(std::string_view unit) const
     return parsed;
 }
 
+bool UnitConverter::sameDimension(const ut_unit* a, const ut_unit* b) const
+{
+    // ut_are_convertible also holds for reciprocal units (s and Hz, um and 1/m), which
+    // udunits2 converts by inverting the value; a quantity of one dimension is never meant
+    // as its reciprocal. Same dimension: a / b is dimensionless.
+    const UnitPtr ratio(ut_divide(a, b));
+    return ratio && ut_are_convertible(ratio.get(), siUnit(Dimension::Dimensionless));
+}
+
 std::string UnitConverter::dimensionOf(const ut_unit* unit) const
 {
     for (int i = 0; i < nDimensions; ++i)
-        if (ut_are_convertible(unit, m_siUnits[i].get()))
+        if (sameDimension(unit, m_siUnits[i].get()))
             return fmt::format("{} {}", kDimensions[i].info.article,
                                kDimensions[i].info.name);
     char definition[128];
@@ -192,21 +201,33 @@ std::string UnitConverter::dimensionOf(const ut_unit* unit) const
     return fmt::format("of dimension {}", definition);
 }
 
-void UnitConverter::refuseDimensionlessFactor(double value, std::string_view unit,
-                                              double perSecond) const
+void UnitConverter::refuseAngularUnit(double value, std::string_view unit,
+                                      double perSecond) const
 {
-    // udunits2 counts the radian (and every other angle or ratio) as the number 1, so
-    // "345.6 rad/s" converts to 345.6 Hz although it is 55.0 Hz: an angular frequency
-    // omega = 2 pi f. Refuse any dimensionless name in a frequency's unit.
+    // udunits2 counts the radian (and every other angle or ratio) as the number 1 and the
+    // revolution and the cycle as 2 pi, so "345.6 rad/s" converts to 345.6 Hz although it
+    // is 55.0 Hz (omega = 2 pi f), and "3000 rpm" or "50 cps" to 2 pi times their value in
+    // Hz. Refuse any dimensionless name in a frequency's unit, and any name that is itself
+    // a frequency but not the hertz.
+    const std::string advice = fmt::format(
+        "give the frequency in Hz (if '{}' measures an angle, revolutions or cycles, {:g} "
+        "{} is {:#.4g} Hz = omega / (2 pi))",
+        unit, value, unit, perSecond / (2.0 * std::numbers::pi));
     for (const std::string& word : identifiers(unit)) {
         const UnitPtr part(ut_parse(m_system.get(), word.c_str(), UT_UTF8));
-        if (part && ut_are_convertible(part.get(), siUnit(Dimension::Dimensionless)))
+        if (!part)
+            continue;
+        if (sameDimension(part.get(), siUnit(Dimension::Dimensionless)))
             throw UnitError(fmt::format(
-                "'{}' holds '{}', an angle or a ratio that udunits2 counts as the number "
-                "1, so {:g} {} would be read as {:g} Hz; give the frequency in Hz (if '{}' "
-                "is an angle, {:g} {} is {:#.4g} Hz = omega / (2 pi))",
-                unit, word, value, unit, perSecond, word, value, unit,
-                perSecond / (2.0 * std::numbers::pi)));
+                "'{}' holds '{}', an angle or a ratio that udunits2 counts as a number, so "
+                "{:g} {} would be read as {:g} Hz; {}",
+                unit, word, value, unit, perSecond, advice));
+        const bool hertz = word.ends_with("Hz") || word.ends_with("hertz");
+        if (!hertz && sameDimension(part.get(), siUnit(Dimension::Frequency)))
+            throw UnitError(fmt::format(
+                "'{}' is a rate that udunits2 defines through an angle or a count, not the "
+                "hertz, so {:g} {} would be read as {:g} Hz; {}",
+                word, value, unit, perSecond, advice));
     }
 }
 
@@ -215,7 +236,14 @@ double UnitConverter::toSi(double value, std::string_view unit, Dimension dimens
     const std::lock_guard lock(m_mutex);
     refuseUnitSyntax(trim(unit));
     const UnitPtr from = parseUnit(unit);
-    if (!ut_are_convertible(from.get(), siUnit(dimension)))
+    if (!sameDimension(from.get(), siUnit(dimension)) &&
+        ut_are_convertible(from.get(), siUnit(dimension)))
+        throw UnitError(fmt::format(
+            "the unit '{}' is {}, the reciprocal of {} {}: udunits2 would invert the "
+            "value",
+            trim(unit), dimensionOf(from.get()), describe(dimension).article,
+            describe(dimension).name));
+    if (!sameDimension(from.get(), siUnit(dimension)))
         throw UnitError(fmt::format("the unit '{}' is {}, not {} {}", trim(unit),
                                     dimensionOf(from.get()), describe(dimension).article,
                                     describe(dimension).name));
@@ -225,7 +253,7 @@ double UnitConverter::toSi(double value, std::string_view unit, Dimension dimens
         throw UnitError(fmt::format("cannot convert '{}' to {}", trim(unit),
                                     describe(dimension).siUnit));
     if (dimension == Dimension::Frequency)
-        refuseDimensionlessFactor(value, trim(unit), cv_convert_double(converter.get(), value));
+        refuseAngularUnit(value, trim(unit), cv_convert_double(converter.get(), value));
     // A difference keeps the unit's scale and drops its offset: cv(value) - cv(0).
     const double si = dimension == Dimension::TemperatureDifference
                           ? cv_convert_double(converter.get(), value) -

@@ -83,7 +83,7 @@ public:
     //! (affine for temperatures; cv(value) - cv(0) for a temperature difference). A bare
     //! number is SI. Refused (UnitError): udunits2's origin-shift and logarithmic syntax
     //! ("85 K @ 1000", "s since 2020-01-01", "lg(re 1 W)"), a unit that starts with a
-    //! number ("85 1000 K"), a dimensionless factor in a frequency ("rad/s": udunits2
+    //! number ("85 1000 K"), an angular unit for a frequency ("rad/s", "rpm": udunits2
     //! counts the radian as 1, so it would read 345.6 rad/s as 345.6 Hz), and numbers
     //! beyond the range of a double.
     Quantity parse(std::string_view text, Dimension dimension) const;
@@ -111,10 +111,13 @@ private:
     //! "a mass" if `unit` has one of the known dimensions, else its SI definition.
     std::string dimensionOf(const ut_unit* unit) const;
     const ut_unit* siUnit(Dimension dimension) const;
-    //! UnitError if a name in `unit` (a frequency's) is dimensionless, e.g. "rad" in
-    //! "rad/s"; `perSecond` is `value` as udunits2 converts it. Caller holds m_mutex.
-    void refuseDimensionlessFactor(double value, std::string_view unit,
-                                   double perSecond) const;
+    //! True if `a` and `b` have one dimension (not merely convertible: udunits2 also
+    //! converts a unit to its reciprocal, inverting the value).
+    bool sameDimension(const ut_unit* a, const ut_unit* b) const;
+    //! UnitError if a name in `unit` (a frequency's) is dimensionless ("rad" in "rad/s")
+    //! or a frequency other than the hertz ("rpm", "cps": udunits2 counts a revolution as
+    //! 2 pi); `perSecond` is `value` as udunits2 converts it. Caller holds m_mutex.
+    void refuseAngularUnit(double value, std::string_view unit, double perSecond) const;
 
     // Declared first so that it is destroyed last, after the units that belong to it.
     std::unique_ptr<ut_system, SystemDeleter> m_system;

@@ -114,7 +114,23 @@ TEST_CASE("udunits2 syntax that would silently move a value is refused", "[input
                           Catch::Contains("345.6 rad/s is 55.00 Hz"));
     CHECK_THROWS_WITH(units.parse("20000 degree/s", Dimension::Frequency),
                       Catch::Contains("'degree'"));
+    // udunits2 defines rpm and cps through a revolution of 2 pi: 3000 rpm is 50 Hz, not
+    // 314.2 Hz.
+    CHECK_THROWS_WITH(units.parse("3000 rpm", Dimension::Frequency),
+                      Catch::Contains("would be read as 314.159 Hz") &&
+                          Catch::Contains("3000 rpm is 50.00 Hz"));
+    CHECK_THROWS_WITH(units.parse("55 cps", Dimension::Frequency),
+                      Catch::Contains("55 cps is 55.00 Hz"));
+    CHECK(units.parse("55 Hz", Dimension::Frequency).value == 55.0);
+    CHECK(units.parse("3300 min^-1", Dimension::Frequency).value == Approx(55.0));
     CHECK(units.parse("0.055 kHz", Dimension::Frequency).value == Approx(55.0));
+    // udunits2 converts a unit to its reciprocal by inverting the value: "20 ms" would be
+    // a frequency of 50 Hz, "25 um" a mesh of 40 000 per metre.
+    CHECK_THROWS_WITH(units.parse("20 ms", Dimension::Frequency),
+                      "the unit 'ms' is a time, the reciprocal of a frequency: udunits2 "
+                      "would invert the value");
+    CHECK_THROWS_WITH(units.parse("25 um", Dimension::InverseLength),
+                      Catch::Contains("the reciprocal of an inverse length"));
     // Beyond a double: the message says so instead of "not a number".
     CHECK_THROWS_WITH(units.parse("1e400 Pa", Dimension::Pressure),
                       "'1e400' is beyond the range of a double (magnitude above "
