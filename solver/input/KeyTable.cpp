@@ -115,6 +115,10 @@ const Range kFrequency = Range::closed(1e-3, 1e4);         // [Hz]
 const Range kPressure = Range::closed(1e3, 1e8);           // [Pa]
 const Range kMass = Range::aboveUpTo(0.0, 1e4);            // [kg]
 const Range kMesh = Range::closed(100.0, 1e6);             // [1/m] 2.5 to 25 400 per inch
+// Why a bare number is refused for a volume: "dead_volume: 1.5" meant as cm^3 would be
+// read as 1.5 m^3, a million times too large and still inside any plausible range.
+const char* const kVolumeUnitNote =
+    "volumes are written in cm^3 or L in the trade, SI in m^3";
 
 Key nameKey()
 {
@@ -229,6 +233,7 @@ std::vector<KeyTable> buildTables()
           quantity("bore", D::Length, kDiameter, "piston diameter").req(),
           quantity("amplitude", D::Length, kDiameter, "half the stroke").req(),
           quantity("dead_volume", D::Volume, kVolume, "volume at full compression")
+              .unit(kVolumeUnitNote)
               .req(),
           map("wall", {Table::DriveWall}, "compression-space wall; absent: adiabatic")}},
         {Table::DriveWall,
@@ -378,7 +383,7 @@ std::vector<KeyTable> buildTables()
         {Table::Volume,
          "components[i] with kind: volume",
          "A lumped gas volume (reservoir, buffer, compliance).",
-         {quantity("volume", D::Volume, kVolume, "gas volume").req()}},
+         {quantity("volume", D::Volume, kVolume, "gas volume").unit(kVolumeUnitNote).req()}},
         {Table::Orifice,
          "components[i] with kind: orifice",
          "A resistive restriction in the main path.",
