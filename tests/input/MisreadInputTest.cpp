@@ -60,6 +60,17 @@ const std::vector<Misread> kMisreads = {
      "hydraulic_diameter: 0.5 mm}", "hydraulic_diameter: 50 mm}", "hydraulic_diameter: 50 mm",
      "components[3].fill.hydraulic_diameter",
      {"the hydraulic diameter 50 mm is not smaller than the passage's diameter 24 mm"}},
+    // A bare 0.2 meant as mm is 0.2 m: inside the diameter range, but the bed's hydraulic
+    // diameter 2 phi d / (3 (1 - phi)) = 81.72 mm does not fit in the 24 mm regenerator.
+    {"sphere bed wider than its passage",
+     "{kind: screen, material: stainless-304, mesh: 400 in^-1, wire_diameter: 25 um}",
+     "{kind: spheres, material: lead, sphere_diameter: 0.2}", "sphere_diameter: 0.2",
+     "components[2].fill.sphere_diameter",
+     {"of 0.2 spheres = 81.72 mm is not smaller than the passage's diameter 24 mm"}},
+    {"revolutions per minute", "frequency: 55 Hz", "frequency: 3300 rpm",
+     "frequency: 3300 rpm", "frequency",
+     {"'rpm' is a rate that udunits2 defines through an angle or a count",
+      "3300 rpm is 55.00 Hz"}},
     {"a drive alone", "components:", "components: []\nsolver:", "components: []",
      "components",
      {"no components: a drive alone is not a machine",
