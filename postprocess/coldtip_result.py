@@ -1,4 +1,4 @@
-"""Read a coldtip result file (HDF5, DESIGN.md section 7) for post-processing.
+"""Read a coldtip result file (HDF5; layout in README.md, "Results") for post-processing.
 
 Only reading lives here: datasets with their `units` attribute, strings, the
 component network (cells, faces, components by name and kind) and unit scaling
@@ -128,8 +128,26 @@ class Result:
             return ""
         return text(self.file["case"].attrs.get("text", b""))
 
+    def isCooldown(self):
+        return "cooldown" in self.file
+
+    def isCompare(self):
+        return "compare" in self.file
+
     def runStatus(self):
-        """One line saying how far the run got, for plot subtitles."""
+        """One line saying how far the run got, for plot subtitles.
+
+        A cooldown is described by its own method and status (settled, time limit...): its
+        /summary is that of the final cycle only, whose "converged" says nothing about it.
+        A frequency-domain file (linear, compare) has no convergence to report.
+        """
+        if self.isCooldown():
+            attrs = self.file["cooldown"].attrs
+            parts = [f"cooldown {text(attrs[k])}" if k == "method" else f"status: {text(attrs[k])}"
+                     for k in ("method", "status") if k in attrs]
+            return ", ".join(parts)
+        if self.summary("status") == "frequency-domain":
+            return "frequency-domain analysis"
         cycles = self.summary("cycles")
         status = self.summary("status", "")
         converged = self.summary("converged")

@@ -1,6 +1,6 @@
 #pragma once
 //! \file ResultFile.hpp
-//! The result file of a run (DESIGN §7; layout documented in README.md, "Result file"):
+//! The result file of a run (layout documented in README.md, "Results"):
 //! /case, /grid, /cycle, /history, /profile, /summary, /solver and /state (the state at the
 //! end of the last complete cycle, for --resume and warm starts). Units on every dataset.
 //! Written whole and moved into place, so a kill leaves the previous complete file.
@@ -15,6 +15,13 @@ namespace coldtip {
 struct RunInfo {
     std::string command_line;
 };
+
+//! Indices that put `x` in increasing order (stable: equal x keep their network order). The
+//! /profile and /linear per-node datasets are written in this order, with the node's index in
+//! /grid alongside (`index`).
+std::vector<long> orderByX(const std::vector<double>& x);
+//! v[order[0]], v[order[1]], ...
+std::vector<double> permuted(const std::vector<double>& v, const std::vector<long>& order);
 
 //! /case: the case text and path, its name, the tool version and the command line.
 void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info);
