@@ -288,10 +288,13 @@ def linkTexts(r):
             if r.has("profile/links/from", "profile/links/to") else [("?", "?")] * len(names))
     m, mUnit = r.data("profile/links/mean_mass_flow")
     h, hUnit = r.data("profile/links/enthalpy_flow")
-    mShow, mShown = convert(m, mUnit, "g/s")
-    return [f"link {n} ({a} -> {b}): mean mass flow {mk:.3g} {mShown}, "
-            f"enthalpy flow {hk:.3g} {hUnit}"
-            for n, (a, b), mk, hk in zip(names, ends, mShow, h)]
+    texts = []
+    for n, (a, b), mk, hk in zip(names, ends, m, h):
+        big = abs(toSi(mk, mUnit)) >= 1e-5
+        mShow, mShown = convert(mk, mUnit, "g/s" if big else "mg/s")
+        texts.append(f"link {n}, {a} -> {b}:\nmean mass flow {float(mShow):.3g} {mShown}, "
+                     f"enthalpy flow {hk:.3g} {hUnit}")
+    return texts
 
 
 # ----- 5. phasors (linear analysis) --------------------------------------------------
@@ -374,11 +377,17 @@ def phasorFigure(r, group, path, what):
         shown, shownUnit = convert(np.abs(values), unit, wanted)
         z = shown * np.exp(1j * np.angle(values))
         lim = 1.15 * max(np.max(np.abs(z)), 1e-300)
+        placed = []
         for k, (zk, ck) in enumerate(zip(z, colours)):
             ax.annotate("", xy=(zk.real, zk.imag), xytext=(0, 0), arrowprops=dict(
                 arrowstyle="-|>", color=ck, lw=1.4, mutation_scale=11))
-            # the port's number just beyond the arrow's tip
-            tip = zk + 0.05 * lim * (zk / abs(zk) if abs(zk) > 0 else 1)
+            # the port's number just beyond the arrow's tip, stepped sideways while it would
+            # sit on an earlier number (arrows of nearly equal phasors end together)
+            outward = zk / abs(zk) if abs(zk) > 0 else -1j
+            tip = zk + 0.06 * lim * outward
+            while any(abs(tip - q) < 0.07 * lim for q in placed):
+                tip += 0.07 * lim * outward * 1j
+            placed.append(tip)
             ax.text(tip.real, tip.imag, str(k + 1), color=ck, fontsize=7, ha="center",
                     va="center", fontweight="bold")
         ax.set_xlim(-lim, lim)
@@ -386,7 +395,7 @@ def phasorFigure(r, group, path, what):
         ax.set_aspect("equal")
         ax.axhline(0, color="0.3", lw=0.6)
         ax.axvline(0, color="0.3", lw=0.6)
-        ax.set_title(f"{quantity} phasors (phase relative to the piston displacement)")
+        ax.set_title(f"{quantity} phasors")
         ax.set_xlabel(layout.unitLabel(f"Re {quantity}", shownUnit))
         ax.set_ylabel(layout.unitLabel(f"Im {quantity}", shownUnit))
     for k, ((label, _, _), ck) in enumerate(zip(ports, colours)):
@@ -402,7 +411,8 @@ def phasors(r, out):
     if group not in r.file:
         return None
     return phasorFigure(r, group, os.path.join(out, "phasors.png"),
-                        "linear analysis: phasors at the component ports")
+                        "linear analysis: phasors at the component ports\n"
+                        "(phases relative to the piston displacement)")
 
 
 def comparePorts(r, group):

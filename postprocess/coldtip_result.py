@@ -27,7 +27,7 @@ _UNITS = {
     "bar": ("pressure", 1e5),
     "m^3": ("volume", 1.0), "cm^3": ("volume", 1e-6), "mm^3": ("volume", 1e-9),
     "m": ("length", 1.0), "cm": ("length", 1e-2), "mm": ("length", 1e-3),
-    "kg/s": ("mass flow", 1.0), "g/s": ("mass flow", 1e-3),
+    "kg/s": ("mass flow", 1.0), "g/s": ("mass flow", 1e-3), "mg/s": ("mass flow", 1e-6),
     "m^3/s": ("volume flow", 1.0), "cm^3/s": ("volume flow", 1e-6),
     "s": ("time", 1.0), "ms": ("time", 1e-3), "min": ("time", 60.0),
     "h": ("time", 3600.0),

@@ -219,16 +219,14 @@ void writeLinear(Hdf5Writer& w, const Machine& machine, const LinearSolution* s,
             tm.push_back(s->T_mean[i]);
             pm.push_back(s->p_mean[i]);
         }
-        // Ordered by x, with each node's index in /grid (ResultFile.hpp, orderByX).
-        const std::vector<long> co = orderByX(x);
-        w.write("/linear/cells/x", permuted(x, co), "m");
-        w.write("/linear/cells/index", co, "1");
-        w.write("/linear/cells/mean_pressure", permuted(pm, co), "Pa");
-        w.write("/linear/cells/mean_temperature", permuted(tm, co), "K");
-        w.write("/linear/cells/pressure_amplitude", permuted(pa, co), "Pa");
-        w.write("/linear/cells/pressure_phase", permuted(pp, co), "deg");
-        w.write("/linear/cells/temperature_amplitude", permuted(ta, co), "K");
-        w.write("/linear/cells/temperature_phase", permuted(tp, co), "deg");
+        // Ordered by x, with each node's row in /grid (ResultFile.hpp, writeAlongX).
+        writeAlongX(w, "/linear/cells", x,
+                    {{"mean_pressure", pm, "Pa"},
+                     {"mean_temperature", tm, "K"},
+                     {"pressure_amplitude", pa, "Pa"},
+                     {"pressure_phase", pp, "deg"},
+                     {"temperature_amplitude", ta, "K"},
+                     {"temperature_phase", tp, "deg"}});
         std::vector<double> xf, ma, mp, ua, up, fp, ac, en;
         for (std::size_t f = 0; f < net.faces().size(); ++f) {
             const FlowFace& face = net.faces()[f];
@@ -245,16 +243,14 @@ void writeLinear(Hdf5Writer& w, const Machine& machine, const LinearSolution* s,
             ac.push_back(0.5 * (p * std::conj(U)).real());
             en.push_back(0.5 * net.gas().cp * (m * std::conj(T)).real());
         }
-        const std::vector<long> fo = orderByX(xf);
-        w.write("/linear/faces/x", permuted(xf, fo), "m");
-        w.write("/linear/faces/index", fo, "1");
-        w.write("/linear/faces/mass_flow_amplitude", permuted(ma, fo), "kg/s");
-        w.write("/linear/faces/mass_flow_phase", permuted(mp, fo), "deg");
-        w.write("/linear/faces/volume_flow_amplitude", permuted(ua, fo), "m^3/s");
-        w.write("/linear/faces/volume_flow_phase", permuted(up, fo), "deg");
-        w.write("/linear/faces/flow_phase_relative_to_pressure", permuted(fp, fo), "deg");
-        w.write("/linear/faces/acoustic_power", permuted(ac, fo), "W");
-        w.write("/linear/faces/enthalpy_flow", permuted(en, fo), "W");
+        writeAlongX(w, "/linear/faces", xf,
+                    {{"mass_flow_amplitude", ma, "kg/s"},
+                     {"mass_flow_phase", mp, "deg"},
+                     {"volume_flow_amplitude", ua, "m^3/s"},
+                     {"volume_flow_phase", up, "deg"},
+                     {"flow_phase_relative_to_pressure", fp, "deg"},
+                     {"acoustic_power", ac, "W"},
+                     {"enthalpy_flow", en, "W"}});
     }
     if (lumped) {
         std::vector<double> L, C, R, K;

@@ -225,13 +225,11 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
     }
     std::vector<double> xc;
     for (const GasCell& c : net.cells()) xc.push_back(c.x);
-    const std::vector<long> cell_order = orderByX(xc);
-    w.write("/profile/cells/x", permuted(xc, cell_order), "m");
-    w.write("/profile/cells/index", cell_order, "1");
-    w.write("/profile/cells/mean_gas_temperature", permuted(T_mean, cell_order), "K");
-    w.write("/profile/cells/mean_pressure", permuted(p_mean, cell_order), "Pa");
-    w.write("/profile/cells/pressure_amplitude", permuted(p_amp, cell_order), "Pa");
-    w.write("/profile/cells/pressure_phase", permuted(p_phase, cell_order), "deg");
+    writeAlongX(w, "/profile/cells", xc,
+                {{"mean_gas_temperature", T_mean, "K"},
+                 {"mean_pressure", p_mean, "Pa"},
+                 {"pressure_amplitude", p_amp, "Pa"},
+                 {"pressure_phase", p_phase, "deg"}});
 
     const std::size_t nf = net.faces().size();
     std::vector<double> xf(nf), acoustic(nf), m_amp(nf), m_phase(nf), flow_vs_p(nf);
@@ -251,14 +249,11 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
         m_phase[f] = std::arg(m1 / displacement) * 180.0 / M_PI;
         flow_vs_p[f] = std::arg(m1 / p1) * 180.0 / M_PI;
     }
-    const std::vector<long> face_order = orderByX(xf);
-    w.write("/profile/faces/x", permuted(xf, face_order), "m");
-    w.write("/profile/faces/index", face_order, "1");
-    w.write("/profile/faces/acoustic_power", permuted(acoustic, face_order), "W");
-    w.write("/profile/faces/mass_flow_amplitude", permuted(m_amp, face_order), "kg/s");
-    w.write("/profile/faces/mass_flow_phase", permuted(m_phase, face_order), "deg");
-    w.write("/profile/faces/flow_phase_relative_to_pressure", permuted(flow_vs_p, face_order),
-            "deg");
+    writeAlongX(w, "/profile/faces", xf,
+                {{"acoustic_power", acoustic, "W"},
+                 {"mass_flow_amplitude", m_amp, "kg/s"},
+                 {"mass_flow_phase", m_phase, "deg"},
+                 {"flow_phase_relative_to_pressure", flow_vs_p, "deg"}});
 
     const std::size_t ns = net.solids().size();
     std::vector<double> xs(ns), Ts(ns);
@@ -268,10 +263,7 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
         xs[k] = net.solids()[k].x;
         Ts[k] = cycleMean(T);
     }
-    const std::vector<long> solid_order = orderByX(xs);
-    w.write("/profile/solids/x", permuted(xs, solid_order), "m");
-    w.write("/profile/solids/index", solid_order, "1");
-    w.write("/profile/solids/mean_temperature", permuted(Ts, solid_order), "K");
+    writeAlongX(w, "/profile/solids", xs, {{"mean_temperature", Ts, "K"}});
 }
 
 std::string unitsOf(const std::string& key)
@@ -288,20 +280,21 @@ std::string unitsOf(const std::string& key)
 
 } // namespace
 
-std::vector<long> orderByX(const std::vector<double>& x)
+void writeAlongX(Hdf5Writer& w, const std::string& group, const std::vector<double>& x,
+                 std::initializer_list<AlongX> series)
 {
     std::vector<long> order(x.size());
     for (std::size_t i = 0; i < x.size(); ++i) order[i] = static_cast<long>(i);
     std::stable_sort(order.begin(), order.end(), [&](long a, long b) { return x[a] < x[b]; });
-    return order;
-}
-
-std::vector<double> permuted(const std::vector<double>& v, const std::vector<long>& order)
-{
-    std::vector<double> out;
-    out.reserve(order.size());
-    for (long i : order) out.push_back(v[i]);
-    return out;
+    auto permuted = [&](const std::vector<double>& v) {
+        std::vector<double> out;
+        out.reserve(order.size());
+        for (long i : order) out.push_back(v[i]);
+        return out;
+    };
+    w.write(group + "/x", permuted(x), "m");
+    w.write(group + "/index", order, "1");
+    for (const AlongX& s : series) w.write(group + "/" + s.name, permuted(s.values), s.units);
 }
 
 void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info)

@@ -5,6 +5,7 @@
 //! end of the last complete cycle, for --resume and warm starts). Units on every dataset.
 //! Written whole and moved into place, so a kill leaves the previous complete file.
 
+#include <initializer_list>
 #include <string>
 
 #include "solver/output/RunSummary.hpp"
@@ -16,12 +17,17 @@ struct RunInfo {
     std::string command_line;
 };
 
-//! Indices that put `x` in increasing order (stable: equal x keep their network order). The
-//! /profile and /linear per-node datasets are written in this order, with the node's index in
-//! /grid alongside (`index`).
-std::vector<long> orderByX(const std::vector<double>& x);
-//! v[order[0]], v[order[1]], ...
-std::vector<double> permuted(const std::vector<double>& v, const std::vector<long>& order);
+//! One per-node dataset of a series along x: its name in the group, values in node order, units.
+struct AlongX {
+    std::string name;
+    const std::vector<double>& values;
+    std::string units;
+};
+//! Writes `group`/x, `group`/index and every series, all ordered by increasing x (stable:
+//! equal x keep their node order); index[i] is the node's row in /grid. The /profile and
+//! /linear per-node groups are written this way.
+void writeAlongX(Hdf5Writer& w, const std::string& group, const std::vector<double>& x,
+                 std::initializer_list<AlongX> series);
 
 //! /case: the case text and path, its name, the tool version and the command line.
 void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info);

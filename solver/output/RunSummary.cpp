@@ -120,11 +120,12 @@ RunSummary summarize(const Machine& machine, const SteadyOutcome& out, const std
     }
     s.values.push_back({"pv_power_W", m.pv_power});
     if (cooler) s.values.push_back({"applied_load_W", m.applied_load});
-    const bool efficiency = cooler && m.cooling_power > 0.0 && m.pv_power > 0.0 &&
-                            m.reject_temperature > m.cold_temperature && m.cold_temperature > 0.0;
-    if (efficiency) {
+    const bool refrigerates = cooler && m.cooling_power > 0.0 && m.pv_power > 0.0;
+    if (refrigerates) {
         s.values.push_back({"cop", m.cop});
-        s.values.push_back({"carnot_fraction", m.carnot_fraction});
+        // Carnot's COP T_c / (T_h - T_c) needs a reject temperature above the cold one.
+        if (m.reject_temperature > m.cold_temperature && m.cold_temperature > 0.0)
+            s.values.push_back({"carnot_fraction", m.carnot_fraction});
     } else if (cooler && !(m.cooling_power > 0.0) && !out.history.empty()) {
         s.notes.push_back(fmt::format(
             "the machine heats its cold end: it puts {:.4g} W into the cold exchanger (net "
@@ -171,9 +172,9 @@ std::string summaryLine(const RunSummary& s)
     else
         line += "test rig (no cold heat exchanger), ";
     line += fmt::format("PV {:.3f} W", value("pv_power_W"));
-    if (std::isfinite(value("cop")))
-        line += fmt::format(", COP {:.4f}, {:.1f} % of Carnot", value("cop"),
-                            100.0 * value("carnot_fraction"));
+    if (std::isfinite(value("cop"))) line += fmt::format(", COP {:.4f}", value("cop"));
+    if (std::isfinite(value("carnot_fraction")))
+        line += fmt::format(", {:.1f} % of Carnot", 100.0 * value("carnot_fraction"));
     for (const LinkFlow& l : s.links)
         line += fmt::format(", link {} {} -> {}: mean mass flow {:.4g} g/s, enthalpy flow {:.4g} W",
                             l.name, l.from, l.to, 1e3 * l.mean_mass_flow, l.enthalpy_flow);

@@ -10,6 +10,7 @@ Run: /usr/bin/python3 tests/postprocess/test_plots.py -v
 (standard-library unittest; pytest is not installed for /usr/bin/python3).
 """
 
+import json
 import os
 import shutil
 import struct
@@ -31,7 +32,7 @@ import matplotlib.image  # noqa: E402
 
 import coldtip_plot  # noqa: E402
 import plot_layout  # noqa: E402
-from coldtip_plot import loopIntegral, portColours, portPhasors  # noqa: E402
+from coldtip_plot import firstHarmonic, loopIntegral, portColours, portPhasors  # noqa: E402
 from coldtip_result import Result  # noqa: E402
 
 WIDTH, HEIGHT = 1600, 1000      # the stated image size: 8 x 5 in at 200 dpi
@@ -148,9 +149,23 @@ class PlotsOfARealRun(unittest.TestCase, PngChecks):
         # /compare only, and the plot draws what it holds rather than skipping everything
         exe = os.environ.get("COLDTIP_EXE", os.path.join(REPO, "build", "coldtip"))
         cmp = os.path.join(self.tmp, "cmp.h5")
-        run = subprocess.run([exe, "compare", self.result, "-o", cmp, "--quiet"],
+        run = subprocess.run([exe, "compare", self.result, "-o", cmp, "--quiet", "--json"],
                              capture_output=True, text=True, timeout=600)
         self.assertEqual(run.returncode, 0, run.stderr)
+        # Phase convention (README.md, "JSON layout"): phases relative to the piston
+        # displacement x = X sin(omega t), positive x compressing, so the PV power is
+        # 1/2 omega A X |p1| sin(phase of p1): pressure leads when the gas takes up work.
+        # A X is the first-harmonic amplitude of the stored drive volume.
+        report = json.loads(run.stdout)
+        drive = report["components"]["drive"]["nonlinear"]["inlet"]
+        with Result(self.result) as r:
+            volume = r.data("cycle/drive_volume")[0]
+            omega = 2 * np.pi * r.frequency()
+        sweep = abs(firstHarmonic(volume))
+        pv = 0.5 * omega * sweep * drive["pressure_amplitude_Pa"] * np.sin(
+            np.radians(drive["pressure_phase_deg"]))
+        self.assertAlmostEqual(pv / report["dft_check"]["pv_power_dft_W"], 1.0, delta=1e-6)
+        self.assertGreater(drive["pressure_phase_deg"], 0.0)
         out = os.path.join(self.tmp, "cmp-plots")
         proc = plot(cmp, out)
         self.assertEqual(proc.returncode, 0, proc.stderr)
