@@ -101,9 +101,9 @@ int warnCoarseGrids(const Machine& machine)
         const double per_cell = span / cells;
         if (per_cell > kMaxKelvinPerCell) {
             fmt::print("warning: {} spans {:.0f} K over {} cells ({:.1f} K per cell): the grid "
-                       "is too coarse for the cooling power (above {:.0f} K per cell the demo's "
-                       "grid study lies more than 4 % below its grid-converged value); give it "
-                       "at least {} cells\n",
+                       "is too coarse for the cooling power (more than {:.0f} K per cell; in the "
+                       "demo's grid study 5.4 K per cell was 6.5 % and 2.7 K per cell 2.6 % "
+                       "below the grid-converged value); give it at least {} cells\n",
                        s.name, span, cells, per_cell, kMaxKelvinPerCell,
                        static_cast<int>(std::ceil(span / kMaxKelvinPerCell)));
             ++warnings;
