@@ -15,8 +15,13 @@ otherwise than expected (the other plots are still written). Images are 1600 x 1
     temperature_profile.png     mean gas and solid temperature along x
     energy_flow.png             cycle-averaged enthalpy flow and acoustic power along x
     phasors.png                 linear-analysis phasors (only with /linear/components)
+    compare_runK.png            a comparison (only with /compare): pressure amplitude and
+                                flow phase at every port, nonlinear beside linear and lumped
     cooldown.png                cold-end temperature vs time (only when /cooldown exists)
-    history.png                 per-cycle cold temperature, cooling and PV power, residual
+    history.png                 per-cycle cold temperature, cooling and PV power, residual;
+                                for a cooldown, its own history against time
+
+When no plot applies to the file (nothing written), exit 1 and say so.
 
 Units are read from each dataset's `units` attribute.
 """
@@ -261,6 +266,9 @@ def energyFlow(r, out):
         units.append(unit)
     for ax in lay.each(0):
         ax.axhline(0, color="0.3", lw=0.7)
+    # links run beside the path: their cycle means are stated, not drawn on the path's curve
+    for text_ in linkTexts(r):
+        lay.axes[0][0].plot([], [], " ", label=text_)
     unit = units[0] if len(set(units)) == 1 else ", ".join(units)
     lay.axes[0][0].set_ylabel(
         layout.unitLabel("cycle-averaged power (+ away from the drive)", unit))
@@ -268,6 +276,25 @@ def energyFlow(r, out):
     layout.title(fig, r, "cycle-averaged energy flow along the flow path")
     lay.placeCallouts(fig)
     return layout.save(fig, os.path.join(out, "energy_flow.png"))
+
+
+def linkTexts(r):
+    """'link NAME (from -> to): mean mass flow .. g/s, enthalpy flow .. W' per link."""
+    if not r.has("profile/links/name", "profile/links/mean_mass_flow",
+                 "profile/links/enthalpy_flow"):
+        return []
+    names = r.strings("profile/links/name")
+    ends = (zip(r.strings("profile/links/from"), r.strings("profile/links/to"))
+            if r.has("profile/links/from", "profile/links/to") else [("?", "?")] * len(names))
+    m, mUnit = r.data("profile/links/mean_mass_flow")
+    h, hUnit = r.data("profile/links/enthalpy_flow")
+    texts = []
+    for n, (a, b), mk, hk in zip(names, ends, m, h):
+        big = abs(toSi(mk, mUnit)) >= 1e-5
+        mShow, mShown = convert(mk, mUnit, "g/s" if big else "mg/s")
+        texts.append(f"link {n}, {a} -> {b}:\nmean mass flow {float(mShow):.3g} {mShown}, "
+                     f"enthalpy flow {hk:.3g} {hUnit}")
+    return texts
 
 
 # ----- 5. phasors (linear analysis) --------------------------------------------------
@@ -287,39 +314,161 @@ def phasorOf(r, group, quantity):
     return amp * np.exp(1j * phase), unit
 
 
-def phasors(r, out):
-    group = "linear/components"
-    if group not in r.file:
-        return None
-    names = (r.strings(f"{group}/name") if r.has(f"{group}/name") else None)
-    pressure, pUnit = phasorOf(r, group, "pressure")
-    flow, uUnit = phasorOf(r, group, "volume_flow")
-    names = names or [f"boundary {i}" for i in range(len(pressure))]
+def portPhasors(r, group):
+    """The ports of the components under `group` (e.g. linear/components), in path order:
+    a list of (label, pressure phasor, volume-flow phasor), with the units of each.
+
+    Each component has an inlet (towards the drive) and an outlet (datasets prefixed
+    `outlet_`). Where one component's outlet is the next one's inlet (the same face, the
+    same phasors), the port is listed once with both names, so no two arrows coincide.
+    """
+    names = r.strings(f"{group}/name") if r.has(f"{group}/name") else None
+    pIn, pUnit = phasorOf(r, group, "pressure")
+    uIn, uUnit = phasorOf(r, group, "volume_flow")
+    names = names or [f"component {i}" for i in range(len(pIn))]
+    sides = [("inlet", pIn, uIn)]
+    if r.has(f"{group}/outlet_pressure_amplitude", f"{group}/outlet_volume_flow_amplitude"):
+        sides.append(("outlet", phasorOf(r, group, "outlet_pressure")[0],
+                      phasorOf(r, group, "outlet_volume_flow")[0]))
+    ports = []
+    for k, name in enumerate(names):
+        for side, p, u in sides:
+            pk, uk = complex(p[k]), complex(u[k])
+            if not (np.isfinite(pk) and np.isfinite(uk)):
+                continue
+            label = f"{name} {side}"
+            if ports and side == "inlet":
+                last = ports[-1]
+                same = (abs(pk - last[1]) <= 1e-6 * max(abs(pk), 1e-300)
+                        and abs(uk - last[2]) <= 1e-6 * max(abs(uk), 1e-300))
+                if same:
+                    ports[-1] = (f"{last[0]} = {label}", last[1], last[2])
+                    continue
+            ports.append((label, pk, uk))
+    return ports, pUnit, uUnit
+
+
+# Ten colours beyond tab10 picked to stay at least 0.2 apart (Euclidean RGB in [0, 1]) from
+# tab10 and from each other, none pale enough to vanish on white.
+EXTRA_COLOURS = ("#000000", "#a6cee3", "#f0027f", "#b15928", "#fc8d62", "#b2df8a", "#66c2a5",
+                 "#1b9e77", "#6a3d9a", "#e6ab02")
+
+
+def portColours(n):
+    """n colours that can be told apart: matplotlib's qualitative tab10, then EXTRA_COLOURS,
+    cycling beyond 20 (the arrows are numbered as well)."""
+    from matplotlib.colors import to_rgba
+    tab10 = layout.plt.get_cmap("tab10")
+    palette = [tab10(i) for i in range(10)] + [to_rgba(c) for c in EXTRA_COLOURS]
+    return [palette[i % len(palette)] for i in range(n)]
+
+
+def phasorFigure(r, group, path, what):
+    ports, pUnit, uUnit = portPhasors(r, group)
+    if not ports:
+        raise Skip(f"no port phasors in /{group}")
     fig = layout.newFigure()
     axes = fig.subplots(1, 2)
-    colours = layout.plt.get_cmap("viridis")(np.linspace(0, 0.95, len(names)))
-    for ax, values, unit, what, wanted in (
-            (axes[0], pressure, pUnit, "pressure", "MPa"),
-            (axes[1], flow, uUnit, "volume flow", "cm^3/s")):
+    colours = portColours(len(ports))
+    for ax, col, unit, quantity, wanted in (
+            (axes[0], 1, pUnit, "pressure", "MPa"),
+            (axes[1], 2, uUnit, "volume flow", "cm^3/s")):
+        values = np.array([p[col] for p in ports])
         shown, shownUnit = convert(np.abs(values), unit, wanted)
         z = shown * np.exp(1j * np.angle(values))
-        for zk, ck, nk in zip(z, colours, names):
+        lim = 1.15 * max(np.max(np.abs(z)), 1e-300)
+        placed = []
+        for k, (zk, ck) in enumerate(zip(z, colours)):
             ax.annotate("", xy=(zk.real, zk.imag), xytext=(0, 0), arrowprops=dict(
-                arrowstyle="-|>", color=ck, lw=1.2, mutation_scale=10))
-            ax.plot([], [], color=ck, lw=2, label=nk)
-        lim = 1.1 * max(np.max(np.abs(z)), 1e-300)
+                arrowstyle="-|>", color=ck, lw=1.4, mutation_scale=11))
+            # the port's number just beyond the arrow's tip, stepped sideways while it would
+            # sit on an earlier number (arrows of nearly equal phasors end together)
+            outward = zk / abs(zk) if abs(zk) > 0 else -1j
+            tip = zk + 0.06 * lim * outward
+            while any(abs(tip - q) < 0.07 * lim for q in placed):
+                tip += 0.07 * lim * outward * 1j
+            placed.append(tip)
+            ax.text(tip.real, tip.imag, str(k + 1), color=ck, fontsize=7, ha="center",
+                    va="center", fontweight="bold")
         ax.set_xlim(-lim, lim)
         ax.set_ylim(-lim, lim)
         ax.set_aspect("equal")
         ax.axhline(0, color="0.3", lw=0.6)
         ax.axvline(0, color="0.3", lw=0.6)
-        ax.set_title(f"{what} phasors")
-        ax.set_xlabel(layout.unitLabel(f"Re {what}", shownUnit))
-        ax.set_ylabel(layout.unitLabel(f"Im {what}", shownUnit))
-    axes[1].legend(loc="center left", bbox_to_anchor=(1.02, 0.5), title="boundary",
-                   fontsize=6, ncol=1 if len(names) <= 20 else 2)
-    layout.title(fig, r, "linear analysis: phasors at component boundaries")
-    return layout.save(fig, os.path.join(out, "phasors.png"))
+        ax.set_title(f"{quantity} phasors")
+        ax.set_xlabel(layout.unitLabel(f"Re {quantity}", shownUnit))
+        ax.set_ylabel(layout.unitLabel(f"Im {quantity}", shownUnit))
+    for k, ((label, _, _), ck) in enumerate(zip(ports, colours)):
+        axes[1].plot([], [], color=ck, lw=2, label=f"{k + 1}: {label}")
+    axes[1].legend(loc="center left", bbox_to_anchor=(1.02, 0.5), title="port",
+                   fontsize=6, ncol=1 if len(ports) <= 20 else 2)
+    layout.title(fig, r, what)
+    return layout.save(fig, path)
+
+
+def phasors(r, out):
+    group = "linear/components"
+    if group not in r.file:
+        return None
+    return phasorFigure(r, group, os.path.join(out, "phasors.png"),
+                        "linear analysis: phasors at the component ports\n"
+                        "(phases relative to the piston displacement)")
+
+
+def comparePorts(r, group):
+    """[(label, pressure amplitude, flow phase)] of every finite port under group."""
+    names = r.strings(f"{group}/name")
+    out = []
+    for k, name in enumerate(names):
+        for side, prefix in (("in", ""), ("out", "outlet_")):
+            if not r.has(f"{group}/{prefix}pressure_amplitude", f"{group}/{prefix}flow_phase"):
+                continue
+            pa, pUnit = r.data(f"{group}/{prefix}pressure_amplitude")
+            fp, _ = r.data(f"{group}/{prefix}flow_phase")
+            out.append((f"{name} {side}", pa[k], fp[k], pUnit))
+    return out
+
+
+def compareRuns(r, out):
+    """One figure per drive amplitude of a `coldtip compare` result: pressure amplitude and
+    flow phase arg(U1/p1) at every port, nonlinear beside the linear and lumped models."""
+    if "compare" not in r.file:
+        return None
+    runs = sorted((k for k in r.file["compare"] if k.startswith("run")),
+                  key=lambda k: int(k[3:]))
+    paths = []
+    for run in runs:
+        g = f"compare/{run}"
+        models = [m for m in ("nonlinear", "linear", "lumped") if r.has(f"{g}/{m}/components/name")]
+        if not models:
+            continue
+        fig = layout.newFigure()
+        top, bottom = fig.subplots(2, 1, sharex=True)
+        labels = None
+        for m, style in zip(models, (dict(color="C0", marker="o"),
+                                     dict(color="C1", marker="s", ls="--"),
+                                     dict(color="C2", marker="^", ls=":"))):
+            ports = comparePorts(r, f"{g}/{m}/components")
+            if labels is None:
+                labels = [p[0] for p in ports]
+            amp, unit = np.array([p[1] for p in ports]), ports[0][3] if ports else "Pa"
+            shown, shownUnit = convert(amp, unit, "kPa")
+            x = np.arange(len(ports))
+            top.plot(x, shown, ms=3, label=m, **style)
+            bottom.plot(x, [p[2] for p in ports], ms=3, label=m, **style)
+        top.set_ylabel(layout.unitLabel("pressure amplitude |p1|", shownUnit))
+        bottom.set_ylabel("flow phase arg(U1/p1) [deg]\n(+ = flow leads pressure)")
+        bottom.axhline(0, color="0.3", lw=0.7)
+        bottom.set_xticks(np.arange(len(labels)))
+        bottom.set_xticklabels(labels, rotation=90, fontsize=5)
+        top.legend(loc="best", framealpha=0.9)
+        scale = r.file[g].attrs.get("amplitude_scale", 1.0)
+        layout.title(fig, r, f"nonlinear cycle against the linear models, drive amplitude "
+                             f"x {float(scale):g}")
+        paths.append(layout.save(fig, os.path.join(out, f"compare_{run}.png")))
+    if not paths:
+        raise Skip("/compare holds no run with port phasors")
+    return paths
 
 
 # ----- 6. cooldown -------------------------------------------------------------------
@@ -381,7 +530,59 @@ def residualTolerance(r):
         return None
 
 
+def cooldownHistory(r, out):
+    """The cooldown's own history against time: cold end and bodies, cooling, PV power,
+    loads (a cooldown's /history is only that of its final cycle)."""
+    need(r, "cooldown/time", "cooldown/cold_temperature")
+    t, tUnit = r.data("cooldown/time")
+    tSi = toSi(t, tUnit)
+    wanted = "h" if tSi[-1] >= 3 * 3600 else "min" if tSi[-1] >= 180 else "s"
+    tShow, tShown = convert(t, tUnit, wanted)
+    fig = layout.newFigure()
+    axes = fig.subplots(2, 2, sharex=True).ravel()
+    temp, kUnit = r.data("cooldown/cold_temperature")
+    axes[0].plot(tShow, temp, color="C0", label="cold end")
+    if r.has("cooldown/body_temperature", "cooldown/body_name"):
+        tb, _ = r.data("cooldown/body_temperature")
+        for k, name in enumerate(r.strings("cooldown/body_name")):
+            if tb.ndim == 2 and k < tb.shape[1]:
+                axes[0].plot(tShow, tb[:, k], ls="--", lw=1.0, label=name)
+    axes[0].set_title("temperature")
+    axes[0].set_ylabel(layout.unitLabel("temperature", kUnit))
+    axes[0].legend(loc="best", fontsize=6)
+    for name, label, style in (("gross_cooling_power", "gross (taken up by the gas)", "--"),
+                               ("cooling_power", "cooling (net of conduction)", "-"),
+                               ("net_cooling_power", "net of the loads", ":")):
+        if r.has(f"cooldown/{name}"):
+            y, unit = r.data(f"cooldown/{name}")
+            axes[1].plot(tShow, y, ls=style, label=label)
+            axes[1].set_ylabel(layout.unitLabel("power", unit))
+    axes[1].axhline(0, color="0.3", lw=0.7)
+    axes[1].set_title("cooling at the cold end")
+    axes[1].legend(loc="best", fontsize=6)
+    if r.has("cooldown/pv_power"):
+        y, unit = r.data("cooldown/pv_power")
+        axes[2].plot(tShow, y, color="C3")
+        axes[2].set_ylabel(layout.unitLabel("PV power", unit))
+    axes[2].set_title("PV power")
+    if r.has("cooldown/load", "cooldown/load_name"):
+        y, unit = r.data("cooldown/load")
+        for k, name in enumerate(r.strings("cooldown/load_name")):
+            if y.ndim == 2 and k < y.shape[1]:
+                axes[3].plot(tShow, y[:, k], label=name)
+        axes[3].set_ylabel(layout.unitLabel("load", unit))
+        if r.strings("cooldown/load_name"):
+            axes[3].legend(loc="best", fontsize=6)
+    axes[3].set_title("loads on the cold head")
+    for ax in axes[2:]:
+        ax.set_xlabel(layout.unitLabel("time", tShown))
+    layout.title(fig, r, "cooldown history")
+    return layout.save(fig, os.path.join(out, "history.png"))
+
+
 def history(r, out):
+    if r.isCooldown():
+        return cooldownHistory(r, out)
     need(r, "history/cycle")
     cycle, _ = r.data("history/cycle")
     panels = (("history/cold_temperature", "cold temperature", False),
@@ -426,7 +627,8 @@ def history(r, out):
 PLOTS = (("pv_loop.png", pvLoop), ("cycle_cold_end.png", cycleColdEnd),
          ("cycle_inertance_inlet.png", cycleInertanceInlet),
          ("temperature_profile.png", temperatureProfile), ("energy_flow.png", energyFlow),
-         ("phasors.png", phasors), ("cooldown.png", cooldown), ("history.png", history))
+         ("phasors.png", phasors), ("compare_runK.png", compareRuns),
+         ("cooldown.png", cooldown), ("history.png", history))
 
 
 def main(argv=None):
@@ -439,6 +641,7 @@ def main(argv=None):
     args = parser.parse_args(argv)
     out = args.output or os.path.dirname(os.path.abspath(args.result))
     failed = False
+    written = 0
     try:
         with Result(args.result) as r:
             os.makedirs(out, exist_ok=True)
@@ -455,12 +658,19 @@ def main(argv=None):
                           f"{type(e).__name__}: {e}", file=sys.stderr)
                     failed = True
                     continue
-                if path:
-                    print(path)
+                for p in ([path] if isinstance(path, str) else path or []):
+                    print(p)
+                    written += 1
     except NotAResult as e:
         print(f"coldtip_plot.py: error: {e}", file=sys.stderr)
         return 1
-    return 2 if failed else 0
+    if failed:
+        return 2
+    if written == 0:
+        print(f"coldtip_plot.py: error: {args.result}: nothing to plot (none of the plots "
+              "applies to what the file holds)", file=sys.stderr)
+        return 1
+    return 0
 
 
 if __name__ == "__main__":

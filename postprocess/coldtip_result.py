@@ -1,4 +1,4 @@
-"""Read a coldtip result file (HDF5, DESIGN.md section 7) for post-processing.
+"""Read a coldtip result file (HDF5; layout in README.md, "Results") for post-processing.
 
 Only reading lives here: datasets with their `units` attribute, strings, the
 component network (cells, faces, components by name and kind) and unit scaling
@@ -27,7 +27,7 @@ _UNITS = {
     "bar": ("pressure", 1e5),
     "m^3": ("volume", 1.0), "cm^3": ("volume", 1e-6), "mm^3": ("volume", 1e-9),
     "m": ("length", 1.0), "cm": ("length", 1e-2), "mm": ("length", 1e-3),
-    "kg/s": ("mass flow", 1.0), "g/s": ("mass flow", 1e-3),
+    "kg/s": ("mass flow", 1.0), "g/s": ("mass flow", 1e-3), "mg/s": ("mass flow", 1e-6),
     "m^3/s": ("volume flow", 1.0), "cm^3/s": ("volume flow", 1e-6),
     "s": ("time", 1.0), "ms": ("time", 1e-3), "min": ("time", 60.0),
     "h": ("time", 3600.0),
@@ -128,8 +128,26 @@ class Result:
             return ""
         return text(self.file["case"].attrs.get("text", b""))
 
+    def isCooldown(self):
+        return "cooldown" in self.file
+
+    def isCompare(self):
+        return "compare" in self.file
+
     def runStatus(self):
-        """One line saying how far the run got, for plot subtitles."""
+        """One line saying how far the run got, for plot subtitles.
+
+        A cooldown is described by its own method and status (settled, time limit...): its
+        /summary is that of the final cycle only, whose "converged" says nothing about it.
+        A frequency-domain file (linear, compare) has no convergence to report.
+        """
+        if self.isCooldown():
+            attrs = self.file["cooldown"].attrs
+            parts = [f"cooldown {text(attrs[k])}" if k == "method" else f"status: {text(attrs[k])}"
+                     for k in ("method", "status") if k in attrs]
+            return ", ".join(parts)
+        if self.summary("status") == "frequency-domain":
+            return "frequency-domain analysis"
         cycles = self.summary("cycles")
         status = self.summary("status", "")
         converged = self.summary("converged")

@@ -23,6 +23,7 @@ KIND_COLOURS = {
     "piston": "#8c8c8c",
 }
 COLD_COLOUR = "#92c5de"   # the cold heat exchanger stands out from the warm ones
+LINK_COLOUR = "#7b3294"   # links across the path (double inlet)
 
 plt.rcParams.update({
     "font.size": 8, "axes.titlesize": 9, "axes.labelsize": 8, "legend.fontsize": 7,
@@ -68,12 +69,17 @@ class AlongX:
 
     def __init__(self, fig, result, nRows=1):
         self.result = result
-        self.comps = [c for c in result.components() if "x_start" in c]
+        placed = [c for c in result.components() if "x_start" in c]
         unit = result.unit("grid/components/x_start")
-        for c in self.comps:
+        self.xUnit = X_UNIT
+        for c in placed:
             c["xs"], self.xUnit = convert(c["x_start"], unit, X_UNIT)
             c["xe"], _ = convert(c["x_end"], unit, X_UNIT)
             c["xs"], c["xe"] = float(c["xs"]), float(c["xe"])
+        # links (double-inlet valves) run beside the path from x_start to x_end: drawn as a
+        # bracket between their connection points, not as a piece of the path
+        self.links = [c for c in placed if c["kind"] == "valve"]
+        self.comps = [c for c in placed if c["kind"] != "valve"]
         cold = result.coldHeatExchanger()
         self.coldIndex = cold["index"] if cold else None
         self.panels = self._panels()
@@ -180,6 +186,19 @@ class AlongX:
             label = band.text((a + b) / 2, 0.5, c["name"], ha="center", va="center",
                               fontsize=7, clip_on=True)
             band._callouts.append((label, (a, b)))
+        for link in self.links:
+            ends = [x for x in (link["xs"], link["xe"]) if x0 <= x <= x1]
+            if not ends:
+                continue
+            lo, hi = min(link["xs"], link["xe"]), max(link["xs"], link["xe"])
+            band.plot([max(lo, x0), min(hi, x1)], [1.2, 1.2], color=LINK_COLOUR, lw=1.2,
+                      clip_on=False)
+            for x in ends:
+                band.plot([x, x], [0.95, 1.2], color=LINK_COLOUR, lw=1.2, clip_on=False)
+                band.plot([x], [0.95], marker="o", color=LINK_COLOUR, ms=3, clip_on=False)
+            if x0 <= (lo + hi) / 2 <= x1:
+                band.text((lo + hi) / 2, 1.32, f"link {link['name']}", ha="center",
+                          va="bottom", fontsize=6, color=LINK_COLOUR)
         band.set_xlim(x0, x1)
 
     def _breakMarks(self):

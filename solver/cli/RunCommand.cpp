@@ -99,13 +99,7 @@ int runCase(const RunOptions& opt, const RunInfo& info)
                    out.failure, out_path);
         return kExitSolverFailure;
     }
-    const CycleMetrics& m = out.metrics;
-    progress.note(fmt::format(
-        "{}: {} after {} cycles ({:.1f} s): cooling {:.3f} W at {:.2f} K, PV {:.3f} W, "
-        "COP {:.4f}, {:.1f} % of Carnot, energy balance {:+.2e}, residual {:.2e}; wrote {}",
-        d.name, status, out.history.size(), out.wall_time_s, m.cooling_power,
-        m.cold_temperature, m.pv_power, m.cop, 100.0 * m.carnot_fraction,
-        m.energy_balance_error, m.heat_residual, out_path));
+    progress.note(summaryLine(summary));
     if (interrupted()) return kExitInterrupted;
     return kExitSuccess;
 }

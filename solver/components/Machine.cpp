@@ -242,9 +242,13 @@ void Machine::addLinks()
         const int a = cellOf(link.from), b = cellOf(link.to);
         const double area =
             link.discharge_coefficient * 0.25 * M_PI * link.orifice_diameter * link.orifice_diameter;
+        // A link sits where it connects: from the cell it leaves to the cell it enters (it is
+        // not a piece of the main path, so it has no x range of its own there).
         ComponentSlice s;
         s.name = link.name;
         s.kind = "valve";
+        s.x_start = net.cells()[a].x;
+        s.x_end = net.cells()[b].x;
         const int index = net.addComponent(s);
         const double x = 0.5 * (net.cells()[a].x + net.cells()[b].x);
         const int h = addOrifice(net, link.name, index, a, b, area, x);

@@ -12,6 +12,9 @@
 //!                     cycle's net heat into a node is the change of its internal energy
 //!                     sum_l m_l h_l(T) over the cycle (NIST c_p integrals), exactly.
 //!   cop = cooling/PV, carnot_fraction = cop / (T_c / (T_h - T_c)).
+//! Without a cold (reject) exchanger the cold (reject) figures stay 0 here; they are not
+//! results then, and the run summary leaves them out (RunSummary.hpp), as it leaves out COP
+//! and fraction of Carnot when the net cooling is not positive.
 
 #include <string>
 #include <vector>

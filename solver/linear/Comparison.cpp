@@ -153,7 +153,7 @@ AmplitudeComparison compareCycle(Machine& machine, const CycleSamples& samples,
             m.drive_acoustic_power_W, false),
         row("cold_end_acoustic_power_W", n.cold_end_acoustic_power_W, l.cold_end_acoustic_power_W,
             m.cold_end_acoustic_power_W, false),
-        row("cooling_power_W", n.gross_cooling_W, l.gross_cooling_W, m.gross_cooling_W, false),
+        row("gross_cooling_W", n.gross_cooling_W, l.gross_cooling_W, m.gross_cooling_W, false),
         row("pv_power_W", integrals.pv_power_W, l.drive_acoustic_power_W, m.drive_acoustic_power_W,
             false),
     };

@@ -79,17 +79,17 @@ std::string unitsOf(const std::string& key)
 std::vector<SummaryValue> cooldownValues(const CooldownOutcome& out)
 {
     const CooldownRow* end = out.history.empty() ? nullptr : &out.history.back();
-    return {
+    // No figure stands for "not computed": without a history there are no final values, and
+    // without the steady-state check there is no steady cold temperature (absent, not 0 K).
+    const double none = std::nan("");
+    std::vector<SummaryValue> v = {
         {"end_time_s", out.end_time},
-        {"final_cold_temperature_K", end ? end->cold_temperature : 0.0},
-        {"final_net_cooling_W", end ? end->net_cooling : 0.0},
-        {"final_cooling_power_W", end ? end->cooling : 0.0},
-        {"final_pv_power_W", end ? end->pv_power : 0.0},
+        {"final_cold_temperature_K", end ? end->cold_temperature : none},
+        {"final_net_cooling_W", end ? end->net_cooling : none},
+        {"final_cooling_power_W", end ? end->cooling : none},
+        {"final_pv_power_W", end ? end->pv_power : none},
         {"distance_estimate_K", out.distance_estimate},
         {"steady_checked", out.steady_checked ? 1.0 : 0.0},
-        {"steady_cold_temperature_K", out.steady_checked ? out.steady_cold_temperature : 0.0},
-        {"steady_difference_K",
-         out.steady_checked && end ? end->cold_temperature - out.steady_cold_temperature : 0.0},
         {"net_cooling_integral_J", out.net_cooling_integral},
         {"body_energy_change_J", out.body_energy_change},
         {"energy_mismatch", energyMismatch(out)},
@@ -105,6 +105,14 @@ std::vector<SummaryValue> cooldownValues(const CooldownOutcome& out)
         {"unsettled_evaluations", static_cast<double>(out.unsettled_evaluations)},
         {"largest_cold_offset_K", out.largest_cold_offset},
     };
+    if (out.steady_checked) {
+        v.push_back({"steady_cold_temperature_K", out.steady_cold_temperature});
+        if (end)
+            v.push_back({"steady_difference_K", end->cold_temperature - out.steady_cold_temperature});
+    }
+    // Absent rather than NaN in the JSON and the attributes.
+    std::erase_if(v, [](const SummaryValue& s) { return std::isnan(s.value); });
+    return v;
 }
 
 nlohmann::json cooldownJson(const Machine& machine, const CooldownOutcome& out)

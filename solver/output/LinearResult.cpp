@@ -219,13 +219,14 @@ void writeLinear(Hdf5Writer& w, const Machine& machine, const LinearSolution* s,
             tm.push_back(s->T_mean[i]);
             pm.push_back(s->p_mean[i]);
         }
-        w.write("/linear/cells/x", x, "m");
-        w.write("/linear/cells/mean_pressure", pm, "Pa");
-        w.write("/linear/cells/mean_temperature", tm, "K");
-        w.write("/linear/cells/pressure_amplitude", pa, "Pa");
-        w.write("/linear/cells/pressure_phase", pp, "deg");
-        w.write("/linear/cells/temperature_amplitude", ta, "K");
-        w.write("/linear/cells/temperature_phase", tp, "deg");
+        // Ordered by x, with each node's row in /grid (ResultFile.hpp, writeAlongX).
+        writeAlongX(w, "/linear/cells", x,
+                    {{"mean_pressure", pm, "Pa"},
+                     {"mean_temperature", tm, "K"},
+                     {"pressure_amplitude", pa, "Pa"},
+                     {"pressure_phase", pp, "deg"},
+                     {"temperature_amplitude", ta, "K"},
+                     {"temperature_phase", tp, "deg"}});
         std::vector<double> xf, ma, mp, ua, up, fp, ac, en;
         for (std::size_t f = 0; f < net.faces().size(); ++f) {
             const FlowFace& face = net.faces()[f];
@@ -242,14 +243,14 @@ void writeLinear(Hdf5Writer& w, const Machine& machine, const LinearSolution* s,
             ac.push_back(0.5 * (p * std::conj(U)).real());
             en.push_back(0.5 * net.gas().cp * (m * std::conj(T)).real());
         }
-        w.write("/linear/faces/x", xf, "m");
-        w.write("/linear/faces/mass_flow_amplitude", ma, "kg/s");
-        w.write("/linear/faces/mass_flow_phase", mp, "deg");
-        w.write("/linear/faces/volume_flow_amplitude", ua, "m^3/s");
-        w.write("/linear/faces/volume_flow_phase", up, "deg");
-        w.write("/linear/faces/flow_phase_relative_to_pressure", fp, "deg");
-        w.write("/linear/faces/acoustic_power", ac, "W");
-        w.write("/linear/faces/enthalpy_flow", en, "W");
+        writeAlongX(w, "/linear/faces", xf,
+                    {{"mass_flow_amplitude", ma, "kg/s"},
+                     {"mass_flow_phase", mp, "deg"},
+                     {"volume_flow_amplitude", ua, "m^3/s"},
+                     {"volume_flow_phase", up, "deg"},
+                     {"flow_phase_relative_to_pressure", fp, "deg"},
+                     {"acoustic_power", ac, "W"},
+                     {"enthalpy_flow", en, "W"}});
     }
     if (lumped) {
         std::vector<double> L, C, R, K;

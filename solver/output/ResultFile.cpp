@@ -1,6 +1,7 @@
 #include "solver/output/ResultFile.hpp"
 
 #include <algorithm>
+#include <cmath>
 #include <stdexcept>
 
 #include "solver/cycle/Harmonics.hpp"
@@ -106,9 +107,11 @@ void writeHistory(Hdf5Writer& w, const Machine& machine, const std::vector<Histo
     for (const HistoryRow& r : h) {
         cycle.push_back(r.cycle);
         time.push_back(r.time);
-        Tc.push_back(r.metrics.cold_temperature);
-        Qc.push_back(r.metrics.cooling_power);
-        gross.push_back(r.metrics.gross_cooling);
+        // A test rig (no cold exchanger) has no cold temperature or cooling: NaN, not 0.
+        const bool cooler = machine.coldComponent() >= 0;
+        Tc.push_back(cooler ? r.metrics.cold_temperature : std::nan(""));
+        Qc.push_back(cooler ? r.metrics.cooling_power : std::nan(""));
+        gross.push_back(cooler ? r.metrics.gross_cooling : std::nan(""));
         pv.push_back(r.metrics.pv_power);
         err.push_back(r.metrics.energy_balance_error);
         res.push_back(r.metrics.heat_residual);
@@ -147,15 +150,23 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
     const Network& net = machine.network();
     const auto& channels = net.quadratures();
     const auto& avg = out.last.averages;
+    // Along the main path, ordered by x: a link (double-inlet valve) runs beside the path, so
+    // its enthalpy flow is not a point of the path's curve; it is in /profile/links.
     auto series = [&](K kind, const std::string& path, const std::string& units) {
+        std::vector<std::size_t> chosen;
+        for (std::size_t i = 0; i < channels.size(); ++i)
+            if (channels[i].kind == kind &&
+                !(channels[i].component >= 0 && net.components()[channels[i].component].kind == "valve"))
+                chosen.push_back(i);
+        std::stable_sort(chosen.begin(), chosen.end(),
+                         [&](std::size_t a, std::size_t b) { return channels[a].x < channels[b].x; });
         std::vector<double> x, v;
         std::vector<std::string> names;
-        for (std::size_t i = 0; i < channels.size(); ++i)
-            if (channels[i].kind == kind) {
-                x.push_back(channels[i].x);
-                v.push_back(avg.empty() ? 0.0 : avg[i]);
-                names.push_back(channels[i].name);
-            }
+        for (std::size_t i : chosen) {
+            x.push_back(channels[i].x);
+            v.push_back(avg.empty() ? std::nan("") : avg[i]);
+            names.push_back(channels[i].name);
+        }
         w.write(path + "/x", x, "m");
         w.write(path + "/value", v, units);
         w.writeStrings(path + "/name", names);
@@ -163,11 +174,36 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
     series(K::EnthalpyFlow, "/profile/enthalpy_flow", "W");
     series(K::GasConduction, "/profile/gas_conduction", "W");
     series(K::WallHeat, "/profile/wall_heat", "W");
+    const std::vector<LinkFlow> links = linkFlows(machine, out);
+    if (!links.empty()) {
+        std::vector<std::string> names, from, to;
+        std::vector<double> x_from, x_to, mdot, H;
+        for (const LinkFlow& l : links) {
+            names.push_back(l.name);
+            from.push_back(l.from);
+            to.push_back(l.to);
+            x_from.push_back(l.x_from);
+            x_to.push_back(l.x_to);
+            mdot.push_back(l.mean_mass_flow);
+            H.push_back(l.enthalpy_flow);
+        }
+        w.writeStrings("/profile/links/name", names);
+        w.writeStrings("/profile/links/from", from);
+        w.writeStrings("/profile/links/to", to);
+        w.write("/profile/links/x_from", x_from, "m");
+        w.write("/profile/links/x_to", x_to, "m");
+        w.write("/profile/links/mean_mass_flow", mdot, "kg/s");
+        w.write("/profile/links/enthalpy_flow", H, "W");
+    }
 
     const CycleSamples& s = out.samples;
     const std::size_t n = s.time.size();
     if (n == 0) return;
     const GasProperties& gas = net.gas();
+    // Phases relative to the piston displacement x(t) = X sin(omega t), as in /linear and
+    // /compare: the samples start on a period boundary, where the displacement's first
+    // harmonic is -i X (x(t) = Re[x1 e^{i omega t}]).
+    const std::complex<double> displacement(0.0, -1.0);
     const std::size_t nc = net.cells().size();
     std::vector<double> T_mean(nc), p_mean(nc), p_amp(nc), p_phase(nc);
     std::vector<std::vector<double>> p(nc, std::vector<double>(n)), rho(nc, std::vector<double>(n));
@@ -185,15 +221,15 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
         p_mean[i] = cycleMean(p[i]);
         const auto p1 = harmonic(p[i], 1);
         p_amp[i] = std::abs(p1);
-        p_phase[i] = std::arg(p1) * 180.0 / M_PI;
+        p_phase[i] = std::arg(p1 / displacement) * 180.0 / M_PI;
     }
     std::vector<double> xc;
     for (const GasCell& c : net.cells()) xc.push_back(c.x);
-    w.write("/profile/cells/x", xc, "m");
-    w.write("/profile/cells/mean_gas_temperature", T_mean, "K");
-    w.write("/profile/cells/mean_pressure", p_mean, "Pa");
-    w.write("/profile/cells/pressure_amplitude", p_amp, "Pa");
-    w.write("/profile/cells/pressure_phase", p_phase, "deg");
+    writeAlongX(w, "/profile/cells", xc,
+                {{"mean_gas_temperature", T_mean, "K"},
+                 {"mean_pressure", p_mean, "Pa"},
+                 {"pressure_amplitude", p_amp, "Pa"},
+                 {"pressure_phase", p_phase, "deg"}});
 
     const std::size_t nf = net.faces().size();
     std::vector<double> xf(nf), acoustic(nf), m_amp(nf), m_phase(nf), flow_vs_p(nf);
@@ -210,14 +246,14 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
         acoustic[f] = cycleMean(pU) - cycleMean(pf) * cycleMean(U);
         const auto m1 = harmonic(m, 1), p1 = harmonic(pf, 1);
         m_amp[f] = std::abs(m1);
-        m_phase[f] = std::arg(m1) * 180.0 / M_PI;
+        m_phase[f] = std::arg(m1 / displacement) * 180.0 / M_PI;
         flow_vs_p[f] = std::arg(m1 / p1) * 180.0 / M_PI;
     }
-    w.write("/profile/faces/x", xf, "m");
-    w.write("/profile/faces/acoustic_power", acoustic, "W");
-    w.write("/profile/faces/mass_flow_amplitude", m_amp, "kg/s");
-    w.write("/profile/faces/mass_flow_phase", m_phase, "deg");
-    w.write("/profile/faces/flow_phase_relative_to_pressure", flow_vs_p, "deg");
+    writeAlongX(w, "/profile/faces", xf,
+                {{"acoustic_power", acoustic, "W"},
+                 {"mass_flow_amplitude", m_amp, "kg/s"},
+                 {"mass_flow_phase", m_phase, "deg"},
+                 {"flow_phase_relative_to_pressure", flow_vs_p, "deg"}});
 
     const std::size_t ns = net.solids().size();
     std::vector<double> xs(ns), Ts(ns);
@@ -227,12 +263,12 @@ void writeProfile(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& ou
         xs[k] = net.solids()[k].x;
         Ts[k] = cycleMean(T);
     }
-    w.write("/profile/solids/x", xs, "m");
-    w.write("/profile/solids/mean_temperature", Ts, "K");
+    writeAlongX(w, "/profile/solids", xs, {{"mean_temperature", Ts, "K"}});
 }
 
 std::string unitsOf(const std::string& key)
 {
+    if (key.ends_with("_kg_s")) return "kg/s";
     if (key.ends_with("_per_s")) return "1/s";
     if (key.ends_with("_W")) return "W";
     if (key.ends_with("_K")) return "K";
@@ -243,6 +279,23 @@ std::string unitsOf(const std::string& key)
 }
 
 } // namespace
+
+void writeAlongX(Hdf5Writer& w, const std::string& group, const std::vector<double>& x,
+                 std::initializer_list<AlongX> series)
+{
+    std::vector<long> order(x.size());
+    for (std::size_t i = 0; i < x.size(); ++i) order[i] = static_cast<long>(i);
+    std::stable_sort(order.begin(), order.end(), [&](long a, long b) { return x[a] < x[b]; });
+    auto permuted = [&](const std::vector<double>& v) {
+        std::vector<double> out;
+        out.reserve(order.size());
+        for (long i : order) out.push_back(v[i]);
+        return out;
+    };
+    w.write(group + "/x", permuted(x), "m");
+    w.write(group + "/index", order, "1");
+    for (const AlongX& s : series) w.write(group + "/" + s.name, permuted(s.values), s.units);
+}
 
 void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info)
 {
@@ -266,11 +319,22 @@ void writeRunResult(const std::string& path, const Machine& machine, const Stead
     writeProfile(w, machine, out);
 
     for (const SummaryValue& v : summary.values) w.attribute("/summary", v.key, v.value);
+    std::vector<SummaryValue> link_values;
+    for (const LinkFlow& l : summary.links) {
+        link_values.push_back({"link." + l.name + ".mean_mass_flow_kg_s", l.mean_mass_flow});
+        link_values.push_back({"link." + l.name + ".enthalpy_flow_W", l.enthalpy_flow});
+    }
+    for (const SummaryValue& v : link_values) w.attribute("/summary", v.key, v.value);
+    w.attribute("/summary", "machine", summary.machine);
+    std::string notes;
+    for (const std::string& n : summary.notes) notes += (notes.empty() ? "" : "\n") + n;
+    if (!notes.empty()) w.attribute("/summary", "notes", notes);
     w.attribute("/summary", "case", summary.case_name);
     w.attribute("/summary", "status", summary.status);
     w.attribute("/summary", "failure", summary.failure);
     std::string units;
     for (const SummaryValue& v : summary.values) units += v.key + ":" + unitsOf(v.key) + ";";
+    for (const SummaryValue& v : link_values) units += v.key + ":" + unitsOf(v.key) + ";";
     w.attribute("/summary", "units", units);
 
     const SolverSpec& sv = d.solver;

@@ -1,10 +1,11 @@
 #pragma once
 //! \file ResultFile.hpp
-//! The result file of a run (DESIGN §7; layout documented in README.md, "Result file"):
+//! The result file of a run (layout documented in README.md, "Results"):
 //! /case, /grid, /cycle, /history, /profile, /summary, /solver and /state (the state at the
 //! end of the last complete cycle, for --resume and warm starts). Units on every dataset.
 //! Written whole and moved into place, so a kill leaves the previous complete file.
 
+#include <initializer_list>
 #include <string>
 
 #include "solver/output/RunSummary.hpp"
@@ -15,6 +16,18 @@ namespace coldtip {
 struct RunInfo {
     std::string command_line;
 };
+
+//! One per-node dataset of a series along x: its name in the group, values in node order, units.
+struct AlongX {
+    std::string name;
+    const std::vector<double>& values;
+    std::string units;
+};
+//! Writes `group`/x, `group`/index and every series, all ordered by increasing x (stable:
+//! equal x keep their node order); index[i] is the node's row in /grid. The /profile and
+//! /linear per-node groups are written this way.
+void writeAlongX(Hdf5Writer& w, const std::string& group, const std::vector<double>& x,
+                 std::initializer_list<AlongX> series);
 
 //! /case: the case text and path, its name, the tool version and the command line.
 void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info);

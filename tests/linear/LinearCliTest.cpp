@@ -67,7 +67,7 @@ TEST_CASE("coldtip compare --json gives nonlinear, linear and lumped side by sid
             INFO(name << " " << model);
             checkPorts(j["components"][name][model]);
         }
-    for (const char* key : {"cooling_power_W", "pv_power_W", "phase_cold_end_deg",
+    for (const char* key : {"gross_cooling_W", "pv_power_W", "phase_cold_end_deg",
                             "drive_pressure_amplitude_Pa"}) {
         INFO(key);
         CHECK(j["table"][key]["nonlinear"].is_number());

@@ -10,6 +10,7 @@ Run: /usr/bin/python3 tests/postprocess/test_plots.py -v
 (standard-library unittest; pytest is not installed for /usr/bin/python3).
 """
 
+import json
 import os
 import shutil
 import struct
@@ -29,14 +30,16 @@ sys.path.insert(0, os.path.join(REPO, "postprocess"))
 import h5py  # noqa: E402
 import matplotlib.image  # noqa: E402
 
-from coldtip_plot import loopIntegral  # noqa: E402
+import coldtip_plot  # noqa: E402
+import plot_layout  # noqa: E402
+from coldtip_plot import firstHarmonic, loopIntegral, portColours, portPhasors  # noqa: E402
 from coldtip_result import Result  # noqa: E402
 
 WIDTH, HEIGHT = 1600, 1000      # the stated image size: 8 x 5 in at 200 dpi
 ALWAYS = ["pv_loop.png", "cycle_cold_end.png", "cycle_inertance_inlet.png",
           "temperature_profile.png", "energy_flow.png", "history.png"]
-# only when /linear/components and /cooldown exist
-LATER = ["phasors.png", "cooldown.png"]
+# only when /linear/components and /cooldown exist (history.png of a cooldown is its own)
+LATER = ["phasors.png", "cooldown.png", "history.png"]
 
 
 def casePath():
@@ -119,7 +122,7 @@ class PlotsOfARealRun(unittest.TestCase, PngChecks):
                 self.assertGoodPng(os.path.join(self.out, name))
 
     def test_later_features_skipped_quietly(self):
-        for name in LATER:
+        for name in ("phasors.png", "cooldown.png"):
             self.assertFalse(os.path.exists(os.path.join(self.out, name)))
             self.assertNotIn(name, self.proc.stderr)
 
@@ -131,7 +134,7 @@ class PlotsOfARealRun(unittest.TestCase, PngChecks):
 
     def test_pv_work_matches_exact_cycle_integral(self):
         # The loop integral of the 96 sampled (p, V) against the solver's own PV power in
-        # /summary, integrated exactly alongside the state (DESIGN.md section 3). The
+        # /summary, integrated exactly alongside the state (DEVELOPERS.md, "Integration"). The
         # drive volume is a pure sinusoid, so the spectral loop integral is exact for the
         # samples; what is left is the integrator's error (relative tolerance 1e-6 in the
         # case), far below 0.1 %.
@@ -140,6 +143,42 @@ class PlotsOfARealRun(unittest.TestCase, PngChecks):
             v = r.data("cycle/drive_volume")[0]
             power = -loopIntegral(p, v) * r.frequency()
             self.assertAlmostEqual(power / r.summary("pv_power_W"), 1.0, delta=1e-3)
+
+    def test_compare_result_is_plotted(self):
+        # `coldtip compare RESULT.h5` reads the stored cycle (no new run); its file holds
+        # /compare only, and the plot draws what it holds rather than skipping everything
+        exe = os.environ.get("COLDTIP_EXE", os.path.join(REPO, "build", "coldtip"))
+        cmp = os.path.join(self.tmp, "cmp.h5")
+        run = subprocess.run([exe, "compare", self.result, "-o", cmp, "--quiet", "--json"],
+                             capture_output=True, text=True, timeout=600)
+        self.assertEqual(run.returncode, 0, run.stderr)
+        # Phase convention (README.md, "JSON layout"): phases relative to the piston
+        # displacement x = X sin(omega t), positive x compressing, so the PV power is
+        # 1/2 omega A X |p1| sin(phase of p1): pressure leads when the gas takes up work.
+        # A X is the first-harmonic amplitude of the stored drive volume.
+        report = json.loads(run.stdout)
+        drive = report["components"]["drive"]["nonlinear"]["inlet"]
+        with Result(self.result) as r:
+            volume = r.data("cycle/drive_volume")[0]
+            omega = 2 * np.pi * r.frequency()
+        sweep = abs(firstHarmonic(volume))
+        pv = 0.5 * omega * sweep * drive["pressure_amplitude_Pa"] * np.sin(
+            np.radians(drive["pressure_phase_deg"]))
+        self.assertAlmostEqual(pv / report["dft_check"]["pv_power_dft_W"], 1.0, delta=1e-6)
+        self.assertGreater(drive["pressure_phase_deg"], 0.0)
+        out = os.path.join(self.tmp, "cmp-plots")
+        proc = plot(cmp, out)
+        self.assertEqual(proc.returncode, 0, proc.stderr)
+        printed = [os.path.basename(p) for p in proc.stdout.split()]
+        self.assertEqual(printed, ["compare_run0.png"])
+        self.assertGoodPng(os.path.join(out, "compare_run0.png"))
+
+    def test_profile_ordered_by_x(self):
+        with Result(self.result) as r:
+            for group in ("enthalpy_flow", "gas_conduction", "wall_heat", "cells", "faces",
+                          "solids"):
+                x, _ = r.data(f"profile/{group}/x")
+                self.assertTrue(np.all(np.diff(x) >= 0), group)
 
     def test_cold_end_and_inertance_found_by_name(self):
         with Result(self.result) as r:
@@ -165,26 +204,34 @@ class LaterFeatures(unittest.TestCase, PngChecks):
             comps = f.create_group("grid/components")
             comps["name"] = np.array([b"drive", b"regenerator", b"cold-end"])
             comps["kind"] = np.array([b"piston", b"regenerator", b"heat-exchanger"])
-            boundaries = [f"{c}.{e}".encode() for c in ("regenerator", "cold-end")
-                          for e in ("inlet", "outlet")]
+            # /linear/components as `coldtip linear` writes it: per component an inlet and
+            # (prefix outlet_) an outlet; the drive's outlet is the regenerator's inlet
             lin = f.create_group("linear/components")
-            lin["name"] = np.array(boundaries)
-            s = np.linspace(0.0, 1.0, len(boundaries))
-            for name, values, unit in (
-                    ("pressure_amplitude", 2e5 * (1 - 0.3 * s), "Pa"),
-                    ("pressure_phase", -15 * s, "deg"),
-                    ("volume_flow_amplitude", 8e-5 * (1 - 0.7 * s), "m^3/s"),
-                    ("volume_flow_phase", 50 - 80 * s, "deg")):
-                lin[name] = values
-                lin[name].attrs["units"] = unit
+            lin["name"] = np.array([b"drive", b"regenerator", b"cold-end"])
+            ports = np.linspace(0.0, 1.0, 4)
+            for prefix, s in (("", ports[[0, 1, 2]]), ("outlet_", ports[[1, 2, 3]])):
+                for name, values, unit in (
+                        ("pressure_amplitude", 2e5 * (1 - 0.3 * s), "Pa"),
+                        ("pressure_phase", -15 * s, "deg"),
+                        ("volume_flow_amplitude", 8e-5 * (1 - 0.7 * s), "m^3/s"),
+                        ("volume_flow_phase", 50 - 80 * s, "deg")):
+                    lin[prefix + name] = values
+                    lin[prefix + name].attrs["units"] = unit
             cool = f.create_group("cooldown")
             t = np.linspace(0.0, 3600.0, 200)
             for name, values, unit in (
                     ("time", t, "s"),
                     ("cold_temperature", 80 + 220 * np.exp(-t / 900), "K"),
+                    ("cooling_power", 3 * np.exp(-t / 900), "W"),
+                    ("pv_power", 50 + 0 * t, "W"),
                     ("report_temperature", np.array([150.0, 90.0]), "K")):
                 cool[name] = values
                 cool[name].attrs["units"] = unit
+            cool.attrs["method"] = "averaged"
+            cool.attrs["status"] = "settled"
+            # the final cycle's run summary, as `coldtip cooldown` writes it
+            f["summary"].attrs["converged"] = 0.0
+            f["summary"].attrs["status"] = "not-converged"
 
     def tearDown(self):
         shutil.rmtree(self.tmp, ignore_errors=True)
@@ -199,7 +246,61 @@ class LaterFeatures(unittest.TestCase, PngChecks):
                 self.assertGoodPng(os.path.join(out, name))
         # the others have no data here: each skipped with a note, none silently
         for name in ALWAYS:
-            self.assertIn(f"{name} skipped", proc.stderr)
+            if name not in LATER:
+                self.assertIn(f"{name} skipped", proc.stderr)
+
+    def test_cooldown_history_titled_as_a_cooldown(self):
+        # history.png of a cooldown is the cooldown's own history against time, titled with
+        # its method and status, never "NOT converged" (the final cycle's /summary flag)
+        titles = []
+        original = plot_layout.save
+
+        def capture(fig, path):
+            titles.append(fig._suptitle.get_text() if fig._suptitle else "")
+            return original(fig, path)
+
+        plot_layout.save = capture
+        try:
+            with Result(self.result) as r:
+                path = coldtip_plot.history(r, self.tmp)
+        finally:
+            plot_layout.save = original
+        self.assertGoodPng(path)
+        self.assertEqual(len(titles), 1)
+        self.assertIn("cooldown history", titles[0])
+        self.assertIn("settled", titles[0])
+        self.assertNotIn("converged", titles[0])
+
+    def test_phasor_ports_labelled_distinct_and_not_doubled(self):
+        with Result(self.result) as r:
+            ports, pUnit, uUnit = portPhasors(r, "linear/components")
+        labels = [p[0] for p in ports]
+        # the drive's outlet and the regenerator's inlet are one port, drawn once
+        self.assertEqual(labels, ["drive inlet", "drive outlet = regenerator inlet",
+                                  "regenerator outlet = cold-end inlet", "cold-end outlet"])
+        self.assertEqual((pUnit, uUnit), ("Pa", "m^3/s"))
+        self.assertAlmostEqual(abs(ports[0][1]), 2e5)
+        # colours told apart: every pair of 20 at least 0.2 apart in RGB (the phasor plot's
+        # earlier viridis ramp put neighbouring ports 0.05 apart)
+        rgb = np.array([c[:3] for c in portColours(20)])
+        gaps = [np.linalg.norm(a - b) for i, a in enumerate(rgb) for b in rgb[i + 1:]]
+        self.assertGreater(min(gaps), 0.2)
+
+
+class NothingToPlot(unittest.TestCase):
+    def test_exit_1_when_no_plot_applies(self):
+        tmp = tempfile.mkdtemp(prefix="coldtip-plots-none-")
+        try:
+            path = os.path.join(tmp, "empty.h5")
+            with h5py.File(path, "w") as f:
+                f.create_group("summary").attrs["case"] = "invented-empty"
+                f["grid/components/name"] = np.array([b"drive"])
+            proc = plot(path, os.path.join(tmp, "plots"))
+            self.assertEqual(proc.returncode, 1, proc.stderr)
+            self.assertIn("nothing to plot", proc.stderr)
+            self.assertEqual(proc.stdout, "")
+        finally:
+            shutil.rmtree(tmp, ignore_errors=True)
 
 
 class BadInput(unittest.TestCase):
