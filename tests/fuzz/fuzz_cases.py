@@ -14,7 +14,8 @@ a tab, a truncated file, stray bytes). Every mutated file goes through `coldtip 
   - on exit 1 leave nothing in the output folder (nor anywhere in its working folder), and
     `check` and `run` agree on whether the input is bad;
   - on any other exit leave at most the result file;
-  - finish within the time limit (10 s; the process is killed after it).
+  - finish within the time limit (10 s of processor time; killed after it), within
+    4 GiB of memory.
 
 Mutation i of seed S is made from its own generator, seeded with "S:i", so one failure is
 replayed alone with --seed S --only i; every failure's file is also kept, with a note of
@@ -24,7 +25,7 @@ Environment (each overridden by the option of the same name):
   COLDTIP_EXE          the coldtip executable (default: <repo>/build/coldtip)
   COLDTIP_FUZZ_SEED    the seed (default: 16)
   COLDTIP_FUZZ_COUNT   mutations per shard (default: --count)
-  COLDTIP_FUZZ_TIME_LIMIT  seconds allowed to one command (default: 10)
+  COLDTIP_FUZZ_TIME_LIMIT  seconds of processor time allowed to one command (default: 10)
   COLDTIP_FUZZ_KEEP    folder for the failing files (default: ./fuzz-failures)
 
 Run: /usr/bin/python3 tests/fuzz/fuzz_cases.py --shard 0 --count 500
@@ -35,9 +36,12 @@ import copy
 import glob
 import json
 import os
+import math
 import random
 import re
+import resource
 import shutil
+import signal
 import subprocess
 import sys
 import tempfile
@@ -224,7 +228,10 @@ def scaleNumber(rng, tree):
     r = rng.random()
     if r < 0.8:
         k = rng.randint(-30, 30)
-        value = f"{float(number) * 10.0 ** k:.6g}"
+        if number.isdigit() and k >= 0:  # an integer stays one: cells: 80 -> 8000000
+            value = str(int(number) * 10 ** k)
+        else:
+            value = f"{float(number) * 10.0 ** k:.6g}"
         how = f"scaled by 1e{k}"
     elif r < 0.9:
         value = f"{-float(number):.6g}"
@@ -351,22 +358,54 @@ def baseCases():
     return files
 
 
-def runCommand(argv, cwd, limit):
-    """(exit code or -signal or None on timeout, stderr, seconds)."""
-    t0 = time.monotonic()
+class Limits:
+    """What one command may use: `seconds` of processor time, enforced by the kernel so that
+    the verdict does not depend on how busy the machine is (a command waiting on nothing is
+    killed after WALL_FACTOR times as long on the clock), and `memory_mb` of memory: as
+    address space, or under AddressSanitizer (`sanitized`), whose shadow memory needs
+    terabytes of address space, as its own hard_rss_limit_mb."""
+    WALL_FACTOR = 6
+
+    def __init__(self, seconds, memory_mb, sanitized):
+        self.seconds, self.memory_mb, self.sanitized = seconds, memory_mb, sanitized
+        self.env = dict(os.environ)
+        if sanitized:
+            extra = f"hard_rss_limit_mb={memory_mb}"
+            old = self.env.get("ASAN_OPTIONS")
+            self.env["ASAN_OPTIONS"] = f"{old}:{extra}" if old else extra
+
+    def apply(self):
+        cpu = int(math.ceil(self.seconds))
+        resource.setrlimit(resource.RLIMIT_CPU, (cpu, cpu + 1))
+        if not self.sanitized:
+            size = self.memory_mb << 20
+            resource.setrlimit(resource.RLIMIT_AS, (size, size))
+
+
+def runCommand(argv, cwd, limits):
+    """(exit code, -signal, or None when killed on the clock; stderr; processor seconds)."""
+    before = resource.getrusage(resource.RUSAGE_CHILDREN)
+    code = None
     try:
         p = subprocess.run(argv, cwd=cwd, stdin=subprocess.DEVNULL, stdout=subprocess.DEVNULL,
-                           stderr=subprocess.PIPE, timeout=limit)
-        return p.returncode, p.stderr.decode("utf-8", "replace"), time.monotonic() - t0
+                           stderr=subprocess.PIPE, preexec_fn=limits.apply,
+                           env=limits.env,
+                           timeout=limits.seconds * Limits.WALL_FACTOR)
+        code, err = p.returncode, p.stderr
     except subprocess.TimeoutExpired as e:
-        err = (e.stderr or b"").decode("utf-8", "replace")
-        return None, err, time.monotonic() - t0
+        err = e.stderr or b""
+    after = resource.getrusage(resource.RUSAGE_CHILDREN)
+    cpu = (after.ru_utime - before.ru_utime) + (after.ru_stime - before.ru_stime)
+    return code, err.decode("utf-8", "replace"), cpu
 
 
-def judge(name, code, err, limit):
+def judge(name, code, err, cpu, limits):
     """The contract's breaches by one command, as (class, detail) pairs."""
     if code is None:
-        return [("timeout", f"{name} still running after {limit:g} s (killed)")]
+        return [("timeout", f"{name} still running after {limits.seconds * Limits.WALL_FACTOR:g}"
+                            f" s on the clock ({cpu:.1f} s of processor time; killed)")]
+    if code == -signal.SIGXCPU or (code == -signal.SIGKILL and cpu >= limits.seconds):
+        return [("timeout", f"{name} used its {limits.seconds:g} s of processor time (killed)")]
     problems = []
     if code < 0:
         problems.append(("signal", f"{name} killed by signal {-code}"))
@@ -374,7 +413,8 @@ def judge(name, code, err, limit):
         problems.append(("exit code", f"{name} exited {code}"))
     for sign in CRASH_SIGNS:
         if sign in err:
-            problems.append(("crash report", f"{name} stderr has '{sign}'"))
+            problems.append((f"'{sign}' on stderr", f"{name} stderr has '{sign}': "
+                             f"{err.strip()[-300:]}"))
             break
     if code != EXIT_OK and code is not None and code > 0 and not err.strip():
         problems.append(("silent failure", f"{name} exited {code} with nothing on stderr"))
@@ -391,22 +431,23 @@ def leftovers(folder, allowed):
     return sorted(found)
 
 
-def runMutation(exe, text, work, limit):
-    """Runs check and run on `text` in a fresh folder; returns (problems, exits)."""
+def runMutation(exe, text, work, limits):
+    """Runs check and run on `text` in a fresh folder; returns (problems, exits, the larger
+    processor time of the two)."""
     shutil.rmtree(work, ignore_errors=True)
     os.makedirs(os.path.join(work, "out"))
     case = os.path.join(work, "case.yaml")
     with open(case, "w", encoding="utf-8", errors="surrogateescape") as f:
         f.write(text)
     problems = []
-    check, err, _ = runCommand([exe, "check", "case.yaml"], work, limit)
-    problems += judge("check", check, err, limit)
+    check, err, check_cpu = runCommand([exe, "check", "case.yaml"], work, limits)
+    problems += judge("check", check, err, check_cpu, limits)
     left = leftovers(work, {"case.yaml"})
     if left:
         problems.append(("files left", f"check left {', '.join(left)}"))
-    run, err, _ = runCommand([exe, "run", "case.yaml", "-o", "out/result.h5",
-                              "--max-cycles", "2", "--quiet"], work, limit)
-    problems += judge("run", run, err, limit)
+    run, err, run_cpu = runCommand([exe, "run", "case.yaml", "-o", "out/result.h5",
+                              "--max-cycles", "2", "--quiet"], work, limits)
+    problems += judge("run", run, err, run_cpu, limits)
     if run == EXIT_BAD_INPUT:
         left = leftovers(work, {"case.yaml"})
         if left:
@@ -420,7 +461,7 @@ def runMutation(exe, text, work, limit):
     if check in ALLOWED_EXITS and run in ALLOWED_EXITS and \
             (check == EXIT_BAD_INPUT) != (run == EXIT_BAD_INPUT):
         problems.append(("check and run disagree", f"check exited {check}, run exited {run}"))
-    return problems, (check, run)
+    return problems, (check, run), max(check_cpu, run_cpu)
 
 
 def main():
@@ -432,6 +473,9 @@ def main():
     ap.add_argument("--count", type=int, default=500, help="mutations per shard")
     ap.add_argument("--time-limit", type=float,
                     default=float(env("COLDTIP_FUZZ_TIME_LIMIT", "10")))
+    ap.add_argument("--memory-limit", type=int, default=4096, help="MiB per command")
+    ap.add_argument("--sanitized", action="store_true",
+                    help="coldtip is built with AddressSanitizer: limit memory through it")
     ap.add_argument("--keep", default=env("COLDTIP_FUZZ_KEEP", "fuzz-failures"))
     ap.add_argument("--only", type=int, action="append", help="replay this mutation index")
     ap.add_argument("--print", action="store_true", help="print each mutation's text")
@@ -447,12 +491,14 @@ def main():
         with open(c, encoding="utf-8") as f:
             sources[c] = f.read()
     print(f"coldtip fuzz: seed {args.seed} (COLDTIP_FUZZ_SEED), mutations "
-          f"{indices[0]}..{indices[-1]} of {len(cases)} base cases, limit {args.time_limit:g} s "
-          f"per command; replay one with: {sys.argv[0]} --seed {args.seed} --only INDEX",
+          f"{indices[0]}..{indices[-1]} of {len(cases)} base cases, limit {args.time_limit:g} s of "
+          f"processor time and {args.memory_limit} MiB per command; replay one with: {sys.argv[0]} --seed {args.seed} --only INDEX",
           flush=True)
 
+    limits = Limits(args.time_limit, args.memory_limit, args.sanitized)
     failures = {}
     exits = {}
+    slowest = []
     t0 = time.monotonic()
     with tempfile.TemporaryDirectory(prefix="coldtip-fuzz-") as tmp:
         for index in indices:
@@ -462,8 +508,9 @@ def main():
             what = f"{os.path.relpath(base, REPO)}: {'; '.join(steps)}"
             if args.print:
                 print(f"--- mutation {index}: {what}\n{text}")
-            problems, codes = runMutation(args.exe, text, os.path.join(tmp, "w"), args.time_limit)
+            problems, codes, cpu = runMutation(args.exe, text, os.path.join(tmp, "w"), limits)
             exits[codes] = exits.get(codes, 0) + 1
+            slowest = sorted(slowest + [(cpu, index, what)], reverse=True)[:5]
             if args.only:
                 print(f"mutation {index}: check {codes[0]}, run {codes[1]}: {what}")
             if not problems:
@@ -483,6 +530,8 @@ def main():
     n = len(indices)
     print(f"{n} mutations in {seconds:.1f} s ({n / seconds:.2f} cases/s); (check, run) exits: " +
           ", ".join(f"{k}: {v}" for k, v in sorted(exits.items(), key=str)))
+    for cpu, index, what in slowest:
+        print(f"slow: mutation {index}, {cpu:.2f} s of processor time: {what}")
     for kind, which in sorted(failures.items()):
         print(f"class '{kind}': {len(which)} mutation(s), e.g. {which[:8]}")
     return 1 if failures else 0
