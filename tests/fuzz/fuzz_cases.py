@@ -14,6 +14,7 @@ a tab, a truncated file, stray bytes). Every mutated file goes through `coldtip 
   - on exit 1 leave nothing in the output folder (nor anywhere in its working folder), and
     `check` and `run` agree on whether the input is bad;
   - on any other exit leave at most the result file;
+  - the same when `run` is given a result path that cannot be written (4 % of mutations).
   - finish within the time limit (10 s of processor time; killed after it), within
     4 GiB of memory.
 
@@ -431,7 +432,13 @@ def leftovers(folder, allowed):
     return sorted(found)
 
 
-def runMutation(exe, text, work, limits):
+# The result file `run` is given: nearly always a new file in an empty folder; sometimes a
+# path that cannot be written (a folder that does not exist, a folder itself).
+RESULT = "out/result.h5"
+BAD_RESULTS = ["out/missing/result.h5", "out"]
+
+
+def runMutation(exe, text, work, limits, result=RESULT):
     """Runs check and run on `text` in a fresh folder; returns (problems, exits, the larger
     processor time of the two)."""
     shutil.rmtree(work, ignore_errors=True)
@@ -445,23 +452,23 @@ def runMutation(exe, text, work, limits):
     left = leftovers(work, {"case.yaml"})
     if left:
         problems.append(("files left", f"check left {', '.join(left)}"))
-    run, err, run_cpu = runCommand([exe, "run", "case.yaml", "-o", "out/result.h5",
+    run, err, run_cpu = runCommand([exe, "run", "case.yaml", "-o", result,
                               "--max-cycles", "2", "--quiet"], work, limits)
     problems += judge("run", run, err, run_cpu, limits)
     if run == EXIT_BAD_INPUT:
         left = leftovers(work, {"case.yaml"})
         if left:
             problems.append(("files left on exit 1", f"run exited 1 and left {', '.join(left)}"))
-        if "case.yaml" not in err:
+        if "case.yaml" not in err and result == RESULT:
             problems.append(("unplaced error", "run exited 1 without naming the case file"))
-    elif run is not None:
-        left = leftovers(work, {"case.yaml", "out/result.h5"})
+    elif run is not None and run >= 0:  # a killed run may leave what a kill leaves
+        left = leftovers(work, {"case.yaml", RESULT})
         if left:
             problems.append(("files left", f"run exited {run} and left {', '.join(left)}"))
-    if check in ALLOWED_EXITS and run in ALLOWED_EXITS and \
+    if check in ALLOWED_EXITS and run in ALLOWED_EXITS and result == RESULT and \
             (check == EXIT_BAD_INPUT) != (run == EXIT_BAD_INPUT):
         problems.append(("check and run disagree", f"check exited {check}, run exited {run}"))
-    return problems, (check, run), max(check_cpu, run_cpu)
+    return problems, (check, run), (check_cpu, run_cpu)
 
 
 def main():
@@ -491,7 +498,8 @@ def main():
         with open(c, encoding="utf-8") as f:
             sources[c] = f.read()
     print(f"coldtip fuzz: seed {args.seed} (COLDTIP_FUZZ_SEED), mutations "
-          f"{indices[0]}..{indices[-1]} of {len(cases)} base cases, limit {args.time_limit:g} s of "
+          f"{', '.join(map(str, indices)) if args.only else f'{indices[0]}..{indices[-1]}'} of "
+          f"{len(cases)} base cases, limit {args.time_limit:g} s of "
           f"processor time and {args.memory_limit} MiB per command; replay one with: {sys.argv[0]} --seed {args.seed} --only INDEX",
           flush=True)
 
@@ -499,18 +507,24 @@ def main():
     failures = {}
     exits = {}
     slowest = []
+    processor = 0.0
     t0 = time.monotonic()
     with tempfile.TemporaryDirectory(prefix="coldtip-fuzz-") as tmp:
         for index in indices:
             rng = random.Random(f"{args.seed}:{index}")
             base = rng.choice(cases)
             text, steps = mutate(rng, sources[base])
+            result = RESULT if rng.random() < 0.96 else rng.choice(BAD_RESULTS)
+            if result != RESULT:
+                steps.append(f"run -o {result}")
             what = f"{os.path.relpath(base, REPO)}: {'; '.join(steps)}"
             if args.print:
                 print(f"--- mutation {index}: {what}\n{text}")
-            problems, codes, cpu = runMutation(args.exe, text, os.path.join(tmp, "w"), limits)
+            problems, codes, cpu = runMutation(args.exe, text, os.path.join(tmp, "w"), limits,
+                                               result)
             exits[codes] = exits.get(codes, 0) + 1
-            slowest = sorted(slowest + [(cpu, index, what)], reverse=True)[:5]
+            processor += sum(cpu)
+            slowest = sorted(slowest + [(max(cpu), index, what)], reverse=True)[:5]
             if args.only:
                 print(f"mutation {index}: check {codes[0]}, run {codes[1]}: {what}")
             if not problems:
@@ -528,7 +542,9 @@ def main():
                       f"     {what}\n     kept in {keep}", flush=True)
     seconds = time.monotonic() - t0
     n = len(indices)
-    print(f"{n} mutations in {seconds:.1f} s ({n / seconds:.2f} cases/s); (check, run) exits: " +
+    print(f"{n} mutations in {seconds:.1f} s ({n / seconds:.2f} cases/s), {processor:.1f} s of "
+          f"processor time in coldtip ({n / max(processor, 1e-9):.2f} cases per processor "
+          f"second); (check, run) exits: " +
           ", ".join(f"{k}: {v}" for k, v in sorted(exits.items(), key=str)))
     for cpu, index, what in slowest:
         print(f"slow: mutation {index}, {cpu:.2f} s of processor time: {what}")
