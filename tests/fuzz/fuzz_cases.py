@@ -487,6 +487,9 @@ def main():
     ap.add_argument("--only", type=int, action="append", help="replay this mutation index")
     ap.add_argument("--print", action="store_true", help="print each mutation's text")
     args = ap.parse_args()
+    args.exe = os.path.abspath(args.exe)  # the commands run in their own folder
+    if not os.access(args.exe, os.X_OK):
+        sys.exit(f"no coldtip executable at {args.exe} (set COLDTIP_EXE or --exe)")
     count = int(env("COLDTIP_FUZZ_COUNT", args.count))
     if args.only:
         indices = args.only
