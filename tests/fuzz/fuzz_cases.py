@@ -13,7 +13,7 @@ a tab, a truncated file, stray bytes). Every mutated file goes through `coldtip 
   - leave no sign of an uncaught exception or a sanitizer report on stderr;
   - on exit 1 leave nothing in the output folder (nor anywhere in its working folder), and
     `check` and `run` agree on whether the input is bad;
-  - on any other exit leave at most the result file;
+  - on any other exit leave at most the result file, and that an HDF5 file if stderr names it;
   - the same when `run` is given a result path that cannot be written (4 % of mutations).
   - finish within the time limit (10 s of processor time; killed after it), within
     4 GiB of memory.
@@ -422,6 +422,15 @@ def judge(name, code, err, cpu, limits):
     return problems
 
 
+def isHdf5(path):
+    """The file starts with the HDF5 signature (the format's superblock at offset 0)."""
+    try:
+        with open(path, "rb") as f:
+            return f.read(8) == b"\x89HDF\r\n\x1a\n"
+    except OSError:
+        return False
+
+
 def leftovers(folder, allowed):
     found = []
     for root, _, files in os.walk(folder):
@@ -465,6 +474,9 @@ def runMutation(exe, text, work, limits, result=RESULT):
         left = leftovers(work, {"case.yaml", RESULT})
         if left:
             problems.append(("files left", f"run exited {run} and left {', '.join(left)}"))
+        if result == RESULT and RESULT in err and not isHdf5(os.path.join(work, RESULT)):
+            problems.append(("promised file missing",
+                             f"run exited {run}, named {RESULT}, and it is not an HDF5 file"))
     if check in ALLOWED_EXITS and run in ALLOWED_EXITS and result == RESULT and \
             (check == EXIT_BAD_INPUT) != (run == EXIT_BAD_INPUT):
         problems.append(("check and run disagree", f"check exited {check}, run exited {run}"))
