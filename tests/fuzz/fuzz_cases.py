@@ -14,9 +14,10 @@ a tab, a truncated file, stray bytes). Every mutated file goes through `coldtip 
   - on exit 1 leave nothing in the output folder (nor anywhere in its working folder), and
     `check` and `run` agree on whether the input is bad;
   - on any other exit leave at most the result file, and that an HDF5 file if stderr names it;
-  - the same when `run` is given a result path that cannot be written (4 % of mutations).
-  - finish within the time limit (10 s of processor time; killed after it), within
-    4 GiB of memory.
+  - finish within 10 s of processor time (killed after it) and 4 GiB of memory.
+
+In 4 % of the mutations `run` is given a result path that cannot be written (a missing
+folder, a folder); the same rules hold.
 
 Mutation i of seed S is made from its own generator, seeded with "S:i", so one failure is
 replayed alone with --seed S --only i; every failure's file is also kept, with a note of
@@ -36,8 +37,8 @@ import argparse
 import copy
 import glob
 import json
-import os
 import math
+import os
 import random
 import re
 import resource
