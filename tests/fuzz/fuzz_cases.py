@@ -513,11 +513,11 @@ def main():
     for c in cases:
         with open(c, encoding="utf-8") as f:
             sources[c] = f.read()
-    print(f"coldtip fuzz: seed {args.seed} (COLDTIP_FUZZ_SEED), mutations "
-          f"{', '.join(map(str, indices)) if args.only else f'{indices[0]}..{indices[-1]}'} of "
-          f"{len(cases)} base cases, limit {args.time_limit:g} s of "
-          f"processor time and {args.memory_limit} MiB per command; replay one with: {sys.argv[0]} --seed {args.seed} --only INDEX",
-          flush=True)
+    which = ", ".join(map(str, indices)) if args.only else f"{indices[0]}..{indices[-1]}"
+    print(f"coldtip fuzz: seed {args.seed} (COLDTIP_FUZZ_SEED), mutations {which} of "
+          f"{len(cases)} base cases, limit {args.time_limit:g} s of processor time and "
+          f"{args.memory_limit} MiB per command; replay one with: {sys.argv[0]} "
+          f"--seed {args.seed} --only INDEX", flush=True)
 
     limits = Limits(args.time_limit, args.memory_limit, args.sanitized)
     failures = {}
