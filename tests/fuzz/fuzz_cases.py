@@ -366,7 +366,7 @@ class Limits:
     killed after WALL_FACTOR times as long on the clock), and `memory_mb` of memory: as
     address space, or under AddressSanitizer (`sanitized`), whose shadow memory needs
     terabytes of address space, as its own hard_rss_limit_mb."""
-    WALL_FACTOR = 6
+    WALL_FACTOR = 12
 
     def __init__(self, seconds, memory_mb, sanitized):
         self.seconds, self.memory_mb, self.sanitized = seconds, memory_mb, sanitized
