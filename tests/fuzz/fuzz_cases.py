@@ -23,12 +23,13 @@ Mutation i of seed S is made from its own generator, seeded with "S:i", so one f
 replayed alone with --seed S --only i; every failure's file is also kept, with a note of
 the mutation, under the keep folder.
 
-Environment (each overridden by the option of the same name):
-  COLDTIP_EXE          the coldtip executable (default: <repo>/build/coldtip)
-  COLDTIP_FUZZ_SEED    the seed (default: 16)
-  COLDTIP_FUZZ_COUNT   mutations per shard (default: --count)
+Environment:
+  COLDTIP_FUZZ_COUNT   mutations per shard; overrides --count (as ctest passes it)
+and, each only a default that the option of the same name overrides:
+  COLDTIP_EXE          the coldtip executable (--exe; default: <repo>/build/coldtip)
+  COLDTIP_FUZZ_SEED    the seed (--seed; default: 16)
   COLDTIP_FUZZ_TIME_LIMIT  seconds of processor time allowed to one command (default: 10)
-  COLDTIP_FUZZ_KEEP    folder for the failing files (default: ./fuzz-failures)
+  COLDTIP_FUZZ_KEEP    folder for the failing files (--keep; default: ./fuzz-failures)
 
 Run: /usr/bin/python3 tests/fuzz/fuzz_cases.py --shard 0 --count 500
 """
