@@ -104,7 +104,9 @@ const Range kFraction = Range::open(0.0, 1.0);
 // tubes, 300 K rigs, laboratory buffers of litres), narrow enough that a slip of unit or
 // exponent ("diameter: 1e-30 m", "temperature: 5000 K") is refused at its key instead of
 // being integrated for minutes. In SI.
-const Range kTemperature = Range::aboveUpTo(0.0, 1000.0);  // [K] absolute
+// No regenerative cooler reaches below about 1.5 K (helium-3 as working gas), and the
+// helium property tables start at 2.5 K (common practice): a wall at 3e-22 K is a slip.
+const Range kTemperature = Range::closed(1.0, 1000.0);     // [K] absolute
 const Range kTemperatureDifference = Range::aboveUpTo(0.0, 100.0); // [K] tolerances
 const Range kDiameter = Range::closed(1e-6, 10.0);         // [m] bores, wires, spheres
 const Range kLength = Range::closed(1e-6, 100.0);          // [m] flow paths, straps

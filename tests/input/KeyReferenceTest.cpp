@@ -70,7 +70,7 @@ TEST_CASE("ranges and expectations read as the messages say", "[input]")
     CHECK(expectation(*keyTable(Table::FillScreen).find("mesh")) ==
           "an inverse length in [100, 1e+06] 1/m");
     CHECK(expectation(*keyTable(Table::Gas).find("charge_temperature")) ==
-          "a temperature in (0, 1000] K");
+          "a temperature in [1, 1000] K");
 }
 
 TEST_CASE("did-you-mean suggests only close names", "[input]")

@@ -84,7 +84,7 @@ const std::vector<Misread> kMisreads = {
       "and this is 85 K", "; expected a temperature above 122."}},
     {"5000 K cold wall", "wall: {temperature: 85 K}", "wall: {temperature: 5000 K}",
      "temperature: 5000 K", "components[3].wall.temperature",
-     {"5000 K is out of range (too large)", "; expected a temperature in (0, 1000] K"}},
+     {"5000 K is out of range (too large)", "; expected a temperature in [1, 1000] K"}},
     {"1e5 K charge temperature", "charge_temperature: 300 K", "charge_temperature: 1e5 K",
      "charge_temperature: 1e5 K", "gas.charge_temperature",
      {"1e5 K is out of range (too large)"}},
@@ -107,7 +107,7 @@ const std::vector<Misread> kMisreads = {
     {"a list in a list", "output: {samples_per_cycle: 96}",
      "output: {samples_per_cycle: 96}\ncooldown: {report_at: [200 K, [100 K]]}",
      "report_at:", "cooldown.report_at[1]",
-     {"got a list; expected a temperature in (0, 1000] K as each entry of report_at"}},
+     {"got a list; expected a temperature in [1, 1000] K as each entry of report_at"}},
 };
 // clang-format on
 
