@@ -1,6 +1,8 @@
 #include "solver/cycle/CooldownAveraged.hpp"
 
 #include <Eigen/Dense>
+
+#include "solver/integrator/Interrupt.hpp"
 #include <algorithm>
 #include <chrono>
 #include <cmath>
@@ -506,7 +508,12 @@ CooldownOutcome averagedCooldown(Machine& machine, const CooldownOptions& o,
         long confirmed_at = -kConfirmedSteps - 1; // macro step of the last fresh matrix
         bool more = true;
         while (more) {
-            more = macro.step(roots);
+            try {
+                more = macro.step(roots);
+            } catch (const Interrupted&) {
+                out.status = "interrupted"; // within a macro step: the last complete one is kept
+                break;
+            }
             for (int k : roots) clock.reached(static_cast<std::size_t>(k), macro.time());
             const CooldownRow row = rowOf(slow, macro.time(), macro.state(), macro.last());
             out.history.push_back(row);
