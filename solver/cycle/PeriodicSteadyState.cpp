@@ -162,6 +162,19 @@ SteadyStart freshStart(long period_index, std::span<const double> y0)
     return s;
 }
 
+SteadyOutcome outcomeAt(const SteadyStart& start)
+{
+    SteadyOutcome out;
+    out.history = start.history;
+    out.diagnostics = start.diagnostics;
+    out.state = start.point.state;
+    out.period_index = start.point.period_index;
+    out.restart = start.point;
+    if (!out.history.empty()) out.metrics = out.history.back().metrics;
+    out.wall_time_s = start.point.wall_time_s;
+    return out;
+}
+
 SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
                                      std::span<const double> y0, const SteadyOptions& options,
                                      const std::function<bool(const SteadyOutcome&)>& on_cycle)
@@ -179,13 +192,7 @@ SteadyOutcome integrateToSteadyState(CycleRunner& runner, const SteadyStart& sta
     auto elapsed = [&] {
         return start.point.wall_time_s + std::chrono::duration<double>(Clock::now() - t0).count();
     };
-    SteadyOutcome out;
-    out.history = start.history;
-    out.diagnostics = start.diagnostics;
-    out.state = start.point.state;
-    out.period_index = start.point.period_index;
-    out.restart = start.point;
-    if (!out.history.empty()) out.metrics = out.history.back().metrics;
+    SteadyOutcome out = outcomeAt(start);
     const Machine& machine = runner.machine();
     DistanceEstimate distance;
     try {

@@ -121,6 +121,8 @@ struct SteadyStart {
 
 //! A fresh start from (period_index, y0).
 SteadyStart freshStart(long period_index, std::span<const double> y0);
+//! The outcome of a solve that has done nothing yet beyond `start`.
+SteadyOutcome outcomeAt(const SteadyStart& start);
 
 //! Cycle-mean enthalpy flow at every component boundary, in the order of
 //! boundaryEnthalpyNames().

@@ -195,13 +195,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, const SteadyStart& start,
     const Machine& machine = runner.machine();
     const ShootingVariables slow(machine.network(), machine.description().gas.charge_pressure,
                                  machine.massFlowScale());
-    SteadyOutcome out;
-    out.history = start.history;
-    out.diagnostics = start.diagnostics;
-    out.state = start.point.state;
-    out.period_index = start.point.period_index;
-    out.restart = start.point;
-    if (!out.history.empty()) out.metrics = out.history.back().metrics;
+    SteadyOutcome out = outcomeAt(start);
     SolverDiagnostics& report = out.diagnostics;
     bool stop = false;
 

@@ -260,6 +260,19 @@ void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info)
 
 namespace {
 
+//! Integrator effort as attributes of `group` (/solver: the run's; /state: up to the
+//! restart point).
+void writeEffort(Hdf5Writer& w, const std::string& group, const IntegratorStats& work)
+{
+    w.attribute(group, "steps", work.steps);
+    w.attribute(group, "rhs_evaluations", work.rhs_evaluations);
+    w.attribute(group, "jacobian_evaluations", work.jacobian_evaluations);
+    w.attribute(group, "linear_setups", work.linear_setups);
+    w.attribute(group, "error_test_failures", work.error_test_failures);
+    w.attribute(group, "nonlinear_iterations", work.nonlinear_iterations);
+    w.attribute(group, "nonlinear_failures", work.nonlinear_failures);
+}
+
 //! /state: where --resume continues. A finished run (converged, failed) saves its last
 //! cycle's end as a fresh start (a warm start); an unfinished one (running, interrupted,
 //! not converged) its restart point, from which the continuation follows the path the run
@@ -291,13 +304,7 @@ void writeRestartState(Hdf5Writer& w, const Machine& machine, const SteadyOutcom
     w.attribute("/state", "newton_iterations", static_cast<long>(p.newton_iterations));
     w.attribute("/state", "cycle_equivalents", p.cycle_equivalents);
     w.attribute("/state", "wall_time_s", p.wall_time_s);
-    w.attribute("/state", "steps", p.work.steps);
-    w.attribute("/state", "rhs_evaluations", p.work.rhs_evaluations);
-    w.attribute("/state", "jacobian_evaluations", p.work.jacobian_evaluations);
-    w.attribute("/state", "linear_setups", p.work.linear_setups);
-    w.attribute("/state", "error_test_failures", p.work.error_test_failures);
-    w.attribute("/state", "nonlinear_iterations", p.work.nonlinear_iterations);
-    w.attribute("/state", "nonlinear_failures", p.work.nonlinear_failures);
+    writeEffort(w, "/state", p.work);
     const ShootingCheckpoint& c = p.shooting;
     w.attribute("/state", "newton_iteration", static_cast<long>(c.iteration));
     w.attribute("/state", "periods_per_map", static_cast<long>(c.cycles_per_map));
@@ -336,11 +343,7 @@ void writeRunResultFile(const std::string& path, const Machine& machine,
 
     const SolverDiagnostics& dg = out.diagnostics;
     w.attribute("/solver", "cycle_equivalents", dg.cycle_equivalents);
-    w.attribute("/solver", "steps", dg.work.steps);
-    w.attribute("/solver", "rhs_evaluations", dg.work.rhs_evaluations);
-    w.attribute("/solver", "jacobian_evaluations", dg.work.jacobian_evaluations);
-    w.attribute("/solver", "error_test_failures", dg.work.error_test_failures);
-    w.attribute("/solver", "nonlinear_failures", dg.work.nonlinear_failures);
+    writeEffort(w, "/solver", dg.work);
     w.attribute("/solver", "method", d.solver.steady.method);
     if (dg.newton_iterations > 0) {
         // Newton steps and the dominant Floquet multipliers (modulus, argument) per step.

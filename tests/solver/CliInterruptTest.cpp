@@ -99,14 +99,53 @@ std::pair<Answer, double> reference(const TempFolder& folder)
             std::chrono::duration<double>(Clock::now() - t0).count()};
 }
 
-void checkSameAnswer(const Answer& resumed, const Answer& ref)
+//! `--resume` from `out` finishes with the uninterrupted run's answer.
+void resumeToTheSameAnswer(const TempFolder& folder, const std::string& out, const Answer& ref)
 {
+    const ProcessResult p = runColdtip(
+        folder, fmt::format("run {} -o {} --resume --quiet", shellQuoted(kSmallCase), shellQuoted(out)));
+    INFO(p.err);
+    CHECK(p.exit_code == 0);
+    const Answer resumed = answerOf(out);
     CHECK(resumed.status == "converged");
     CHECK(largestDifference(resumed.solid_temperature, ref.solid_temperature) <= kTemperatureTolerance);
     CHECK(std::abs(resumed.cooling_power - ref.cooling_power) <= 1e-3 * std::abs(ref.cooling_power));
     // The accelerated solver resumes at a restart point of its own path: bit-identical.
     CHECK(resumed.cooling_power == ref.cooling_power);
     CHECK(resumed.solid_temperature == ref.solid_temperature);
+}
+
+//! Random moments within a run of `run_seconds` (seeded; the seed is printed on failure).
+struct Moments {
+    explicit Moments(double run_seconds) : run_seconds(run_seconds) {}
+    double next() { return std::uniform_real_distribution<double>(0.05 * run_seconds, 0.9 * run_seconds)(random); }
+    double run_seconds;
+    std::uint64_t seed_value = seed();
+    std::mt19937_64 random{seed_value};
+};
+
+struct Cut {
+    int exit_code = -1;
+    double seconds_to_exit = 0.0;
+};
+
+//! Run the small case into `out` and send `signal` at the next random moment.
+Cut cutRun(const std::string& out, int signal, Moments& moments, int trial,
+           const std::vector<std::string>& extra = {})
+{
+    const double at = moments.next();
+    // Always printed: a failure further on is replayed with the same seed.
+    fmt::print(stderr, "CliInterruptTest: seed {} (COLDTIP_TEST_SEED), trial {}: signal {} at "
+                       "{:.2f} s of {:.2f} s\n",
+               moments.seed_value, trial, signal, at, moments.run_seconds);
+    const pid_t pid = startRun(kSmallCase, out, extra);
+    std::this_thread::sleep_for(std::chrono::duration<double>(at));
+    const auto sent = Clock::now();
+    kill(pid, signal);
+    Cut cut;
+    cut.exit_code = exitCode(pid);
+    cut.seconds_to_exit = std::chrono::duration<double>(Clock::now() - sent).count();
+    return cut;
 }
 
 } // namespace
@@ -197,33 +236,19 @@ TEST_CASE("SIGINT and SIGTERM at random moments stop within 2 s, and --resume gi
 {
     TempFolder folder;
     const auto [ref, ref_seconds] = reference(folder);
-    const std::uint64_t s = seed();
-    std::mt19937_64 random(s);
     // Moments spread over the run: the warm-up, the Newton steps (inside GMRES products
     // most of the time), the settle maps.
-    std::uniform_real_distribution<double> moment(0.05 * ref_seconds, 0.9 * ref_seconds);
+    Moments moments(ref_seconds);
     for (int trial = 0; trial < 4; ++trial) {
         const int signal = trial % 2 ? SIGTERM : SIGINT;
-        const double at = moment(random);
         const std::string out = folder.file(fmt::format("cut{}.h5", trial));
-        INFO(fmt::format("seed {} (COLDTIP_TEST_SEED), trial {}: {} at {:.2f} s of {:.2f} s",
-                         s, trial, signal == SIGTERM ? "SIGTERM" : "SIGINT", at, ref_seconds));
-        const pid_t pid = startRun(kSmallCase, out);
-        std::this_thread::sleep_for(std::chrono::duration<double>(at));
-        const auto sent = Clock::now();
-        kill(pid, signal);
-        const int code = exitCode(pid);
-        const double to_exit = std::chrono::duration<double>(Clock::now() - sent).count();
-        if (code == 0) continue; // finished before the signal (a slow reference run)
-        CHECK(code == 3);
-        CHECK(to_exit < 2.0);
+        const Cut cut = cutRun(out, signal, moments, trial);
+        if (cut.exit_code == 0) continue; // finished before the signal (a slow reference run)
+        CHECK(cut.exit_code == 3);
+        CHECK(cut.seconds_to_exit < 2.0);
         REQUIRE(isColdtipFile(out));
         CHECK(answerOf(out).status == "interrupted");
-        const ProcessResult resumed = runColdtip(
-            folder, fmt::format("run {} -o {} --resume --quiet", shellQuoted(kSmallCase), shellQuoted(out)));
-        INFO(resumed.err);
-        CHECK(resumed.exit_code == 0);
-        checkSameAnswer(answerOf(out), ref);
+        resumeToTheSameAnswer(folder, out, ref);
     }
 }
 
@@ -233,31 +258,19 @@ TEST_CASE("SIGKILL at random moments leaves no file or a readable one, and nothi
 {
     TempFolder folder;
     const auto [ref, ref_seconds] = reference(folder);
-    const std::uint64_t s = seed();
-    std::mt19937_64 random(s);
-    std::uniform_real_distribution<double> moment(0.05 * ref_seconds, 0.9 * ref_seconds);
+    Moments moments(ref_seconds);
     for (int trial = 0; trial < 3; ++trial) {
-        const double at = moment(random);
         const std::string out = folder.file(fmt::format("killed{}.h5", trial));
-        INFO(fmt::format("seed {} (COLDTIP_TEST_SEED), trial {}: SIGKILL at {:.2f} s of {:.2f} s",
-                         s, trial, at, ref_seconds));
         // A checkpoint after every cycle: most kills land in or near a checkpoint write.
-        const pid_t pid = startRun(kSmallCase, out, {"--checkpoint-every", "0"});
-        std::this_thread::sleep_for(std::chrono::duration<double>(at));
-        kill(pid, SIGKILL);
-        const int code = exitCode(pid);
-        if (code == 0) continue;
+        const Cut cut = cutRun(out, SIGKILL, moments, trial, {"--checkpoint-every", "0"});
+        if (cut.exit_code == 0) continue;
         if (std::filesystem::exists(out)) {
             CHECK(isColdtipFile(out));
             CHECK(answerOf(out).status == "running");
         }
         // A half-written checkpoint may be left as out.partial; the resume neither reads
         // nor keeps it.
-        const ProcessResult resumed = runColdtip(
-            folder, fmt::format("run {} -o {} --resume --quiet", shellQuoted(kSmallCase), shellQuoted(out)));
-        INFO(resumed.err);
-        CHECK(resumed.exit_code == 0);
+        resumeToTheSameAnswer(folder, out, ref);
         CHECK_FALSE(std::filesystem::exists(out + ".partial"));
-        checkSameAnswer(answerOf(out), ref);
     }
 }
