@@ -72,7 +72,8 @@ int runCooldownCommand(const CooldownCliOptions& opt, const RunInfo& info)
         return !interrupted();
     };
     CooldownOutcome out = runCooldown(machine, o, on_row);
-    if (!out.final_cycle.history.empty() || !out.history.empty()) {
+    // An interrupted cooldown leaves its file even before its first row (exit 3: readable).
+    if (!out.final_cycle.history.empty() || !out.history.empty() || out.status == "interrupted") {
         if (out.final_cycle.history.empty()) out.final_cycle.state = out.state;
         writeCooldownResult(out_path, machine, out, info);
     }

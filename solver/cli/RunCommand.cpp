@@ -43,6 +43,14 @@ int runCase(const RunOptions& opt, const RunInfo& info)
     if (opt.resume) {
         if (std::filesystem::exists(out_path)) {
             start = readSavedState(out_path, machine).start;
+            // A converged result has nothing to continue: solving again from its last cycle
+            // would start a new path and give another answer (within the tolerance, but
+            // not the one on file).
+            if (Hdf5Reader(out_path).stringAttribute("/summary", "status") == "converged") {
+                fmt::print(stderr, "note: {} is converged already: nothing to resume, the file "
+                                   "is left as it is\n", out_path);
+                return kExitSuccess;
+            }
             if (!opt.quiet)
                 fmt::print(stderr, "resuming from {}: period {}, {} cycles and {:.1f} s so far{}\n",
                            out_path, start.point.period_index, start.point.history_rows,

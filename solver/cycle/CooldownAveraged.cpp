@@ -493,6 +493,7 @@ CooldownOutcome averagedCooldown(Machine& machine, const CooldownOptions& o,
     CooldownOutcome out;
     out.method = "accelerated";
     out.status = "time-limit";
+    out.state = y0; // until a macro step completes (an interruption in the first one)
     SlowEquation slow(machine, o);
     const IntegratorStats before = slow.runner().session().stats();
     ReportClock clock(o.report_at);
@@ -551,6 +552,8 @@ CooldownOutcome averagedCooldown(Machine& machine, const CooldownOptions& o,
         out.largest_settle_change = macro.worstChange();
         out.unsettled_evaluations = macro.unsettled();
         out.largest_cold_offset = macro.largestColdOffset();
+    } catch (const Interrupted&) {
+        out.status = "interrupted"; // outside a macro step (a settle check, the first one)
     } catch (const std::exception& e) {
         out.status = "failed";
         out.failure = e.what();

@@ -53,7 +53,16 @@ Hdf5Writer::Hdf5Writer(std::string path)
     : m_path(std::move(path)), m_partial(partialPathOf(m_path)), m_file(createFile(m_path, m_partial))
 {
     // The mark by which a later run knows the file as coldtip's own (OutputFile.hpp).
-    attribute("/", kWrittenByAttribute, std::string("coldtip ") + COLDTIP_VERSION);
+    try {
+        attribute("/", kWrittenByAttribute, std::string("coldtip ") + COLDTIP_VERSION);
+    } catch (const H5::Exception& e) {
+        try {
+            m_file.close();
+        } catch (const H5::Exception&) {
+        }
+        std::remove(m_partial.c_str());
+        throw std::runtime_error(m_path + ": cannot write " + m_partial + ": " + e.getDetailMsg());
+    }
 }
 
 Hdf5Writer::~Hdf5Writer()

@@ -205,7 +205,7 @@ TEST_CASE("an interrupted plain run exits 3 with a readable file that --resume c
     CHECK(r.doubleAttribute("/summary", "wall_time_s") >= wall.back());
 }
 
-TEST_CASE("--resume of a missing file says it starts afresh", "[cli][interrupt]")
+TEST_CASE("a resume of a missing file says it starts afresh", "[cli][interrupt]")
 {
     TempFolder folder;
     const std::string out = folder.file("missing.h5");
@@ -215,7 +215,23 @@ TEST_CASE("--resume of a missing file says it starts afresh", "[cli][interrupt]"
     CHECK(p.err.find("starting from the initial state") != std::string::npos);
 }
 
-TEST_CASE("--resume refuses a file of another network with exit 1", "[cli][interrupt]")
+TEST_CASE("a resume of a converged result leaves it as it is", "[cli][interrupt]")
+{
+    // Solving again from its last cycle would start a new path and give another answer.
+    TempFolder folder;
+    const std::string out = folder.file("done.h5");
+    REQUIRE(reference(folder).first.status == "converged");
+    std::filesystem::copy_file(folder.file("ref.h5"), out);
+    const std::string before = readText(out);
+    const ProcessResult p = runColdtip(folder, fmt::format("run {} -o {} --resume",
+                                                           shellQuoted(kSmallCase), shellQuoted(out)));
+    INFO(p.err);
+    CHECK(p.exit_code == 0);
+    CHECK(p.err.find("converged already") != std::string::npos);
+    CHECK(readText(out) == before);
+}
+
+TEST_CASE("a resume refuses a file of another network with exit 1", "[cli][interrupt]")
 {
     TempFolder folder;
     const std::string out = folder.file("other.h5");
@@ -272,5 +288,37 @@ TEST_CASE("SIGKILL at random moments leaves no file or a readable one, and nothi
         // nor keeps it.
         resumeToTheSameAnswer(folder, out, ref);
         CHECK_FALSE(std::filesystem::exists(out + ".partial"));
+    }
+}
+
+TEST_CASE("SIGTERM stops a cooldown, averaged or plain, within 2 s with a readable file",
+          "[cli][interrupt][cooldown]")
+{
+    TempFolder folder;
+    for (const char* method : {"averaged", "plain"}) {
+        const std::string out = folder.file(std::string(method) + ".h5");
+        const pid_t pid = fork();
+        if (pid == 0) {
+            const std::string exe = COLDTIP_EXE;
+            std::freopen("/dev/null", "w", stderr);
+            if (std::string(method) == "plain")
+                execl(exe.c_str(), exe.c_str(), "cooldown", COLDTIP_TEST_DATA "/cooldown/small-cold-head.yaml",
+                      "-o", out.c_str(), "--quiet", "--plain", static_cast<char*>(nullptr));
+            else
+                execl(exe.c_str(), exe.c_str(), "cooldown", COLDTIP_TEST_DATA "/cooldown/small-cold-head.yaml",
+                      "-o", out.c_str(), "--quiet", static_cast<char*>(nullptr));
+            _exit(127);
+        }
+        // The small cold head's cooldown takes ten seconds and more: one second is inside it.
+        std::this_thread::sleep_for(std::chrono::seconds(1));
+        const auto sent = Clock::now();
+        kill(pid, SIGTERM);
+        const int code = exitCode(pid);
+        const double seconds = std::chrono::duration<double>(Clock::now() - sent).count();
+        INFO(method << ": exit " << code << " " << seconds << " s after SIGTERM");
+        CHECK(code == 3);
+        CHECK(seconds < 2.0);
+        REQUIRE(isColdtipFile(out));
+        CHECK(Hdf5Reader(out).stringAttribute("/cooldown", "status") == "interrupted");
     }
 }
