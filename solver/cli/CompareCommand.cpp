@@ -10,6 +10,7 @@
 #include "solver/input/CaseReader.hpp"
 #include "solver/linear/Comparison.hpp"
 #include "solver/output/LinearResult.hpp"
+#include "solver/output/OutputFile.hpp"
 
 namespace coldtip::cli {
 
@@ -104,6 +105,11 @@ void printTable(const AmplitudeComparison& a)
 int runCompare(const CompareOptions& opt, const RunInfo& info)
 {
     const bool from_result = opt.input.ends_with(".h5");
+    watchInterrupts();
+    const std::string out_path = opt.output.empty()
+        ? std::filesystem::path(opt.input).stem().string() + "-compare.h5"
+        : opt.output;
+    checkOutputFile(out_path, {opt.input});
     CaseDescription d;
     if (from_result) {
         Hdf5Reader r(opt.input);
@@ -120,7 +126,6 @@ int runCompare(const CompareOptions& opt, const RunInfo& info)
     Progress progress(opt.quiet);
     std::vector<double> y0 = machine.initialState();
     long period = 0;
-    watchInterrupts();
     for (double scale : scales) {
         machine.drive().piston().scale = scale;
         if (from_result && scale == 1.0) {
@@ -138,6 +143,10 @@ int runCompare(const CompareOptions& opt, const RunInfo& info)
                 return !interrupted();
             });
         progress.finish();
+        if (out.interrupted || interrupted()) {
+            progress.note("interrupted: nothing written (a comparison is not resumed)");
+            return kExitInterrupted;
+        }
         if (out.failed || out.samples.time.empty()) {
             fmt::print(stderr, "error: nonlinear run at amplitude x {} failed: {}\n", scale, out.failure);
             return kExitSolverFailure;
@@ -151,13 +160,10 @@ int runCompare(const CompareOptions& opt, const RunInfo& info)
         comparison.amplitudes.push_back(compareCycle(machine, out.samples, integrals));
         y0 = out.state; // warm start for the next amplitude
         period = out.period_index;
-        if (interrupted()) return kExitInterrupted;
+
     }
     machine.drive().piston().scale = 1.0;
 
-    const std::string out_path = opt.output.empty()
-        ? std::filesystem::path(opt.input).stem().string() + "-compare.h5"
-        : opt.output;
     Hdf5Writer w(out_path);
     writeCaseAttributes(w, machine, info);
     writeComparison(w, comparison);

@@ -11,6 +11,7 @@
 #include "solver/input/CaseReader.hpp"
 #include "solver/input/InputError.hpp"
 #include "solver/output/CooldownResult.hpp"
+#include "solver/output/OutputFile.hpp"
 
 namespace coldtip::cli {
 
@@ -45,17 +46,18 @@ void requireColdBody(const Machine& machine)
 
 int runCooldownCommand(const CooldownCliOptions& opt, const RunInfo& info)
 {
-    const CaseDescription d = input::readCaseFile(opt.case_path);
-    Machine machine(d);
-    requireColdBody(machine);
+    watchInterrupts();
     const std::string out_path =
         opt.output.empty() ? std::filesystem::path(opt.case_path).stem().string() + ".h5"
                            : opt.output;
+    checkOutputFile(out_path, {opt.case_path});
+    const CaseDescription d = input::readCaseFile(opt.case_path);
+    Machine machine(d);
+    requireColdBody(machine);
     const CooldownOptions o = cooldownOptionsFor(machine, opt.plain ? "plain" : "");
     Progress progress(opt.quiet);
     progress.note(fmt::format("{}: cooldown ({}) from {:.2f} K, at most {:.0f} s", d.name,
                               o.method, o.start_temperature, o.time_limit));
-    watchInterrupts();
     const auto t0 = std::chrono::steady_clock::now();
     auto last_note = t0;
     auto on_row = [&](const CooldownRow& r) {
@@ -70,7 +72,8 @@ int runCooldownCommand(const CooldownCliOptions& opt, const RunInfo& info)
         return !interrupted();
     };
     CooldownOutcome out = runCooldown(machine, o, on_row);
-    if (!out.final_cycle.history.empty() || !out.history.empty()) {
+    // An interrupted cooldown leaves its file even before its first row (exit 3: readable).
+    if (!out.final_cycle.history.empty() || !out.history.empty() || out.status == "interrupted") {
         if (out.final_cycle.history.empty()) out.final_cycle.state = out.state;
         writeCooldownResult(out_path, machine, out, info);
     }

@@ -4,6 +4,7 @@
 #include <iostream>
 
 #include "solver/cli/Commands.hpp"
+#include "solver/output/OutputFile.hpp"
 #include "solver/input/CaseReader.hpp"
 #include "solver/linear/LinearAnalysis.hpp"
 #include "solver/linear/LumpedModel.hpp"
@@ -58,6 +59,10 @@ void printLumped(const LumpedModel& l)
 int runLinear(const LinearOptions& opt, const RunInfo& info)
 {
     const auto start = std::chrono::steady_clock::now();
+    const std::string out = opt.output.empty()
+        ? std::filesystem::path(opt.case_path).stem().string() + (opt.lumped ? "-lumped.h5" : "-linear.h5")
+        : opt.output;
+    checkOutputFile(out, {opt.case_path, opt.from});
     const CaseDescription d = input::readCaseFile(opt.case_path);
     Machine machine(d);
     std::vector<double> cell_T, solid_T;
@@ -82,9 +87,6 @@ int runLinear(const LinearOptions& opt, const RunInfo& info)
         phasors = machinePhasors(machine, firstHarmonics(machine, solution));
     }
     const double wall = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
-    const std::string out = opt.output.empty()
-        ? std::filesystem::path(opt.case_path).stem().string() + (opt.lumped ? "-lumped.h5" : "-linear.h5")
-        : opt.output;
     Hdf5Writer w(out);
     writeCaseAttributes(w, machine, info);
     writeLinear(w, machine, opt.lumped ? nullptr : &solution, phasors, opt.lumped ? &lumped : nullptr);

@@ -1,8 +1,10 @@
+#include <filesystem>
 #include <fmt/format.h>
 #include <sys/wait.h>
 #include <unistd.h>
 
 #include "solver/cli/Commands.hpp"
+#include "solver/output/OutputFile.hpp"
 
 namespace coldtip::cli {
 
@@ -12,6 +14,9 @@ namespace {
 //! /usr/bin/python3); the script lives in the source tree's postprocess/.
 int plotResult(const std::string& result, const std::string& directory)
 {
+    // The folder the plots go to (by default the result's own) takes files: checked first.
+    checkOutputFolder(directory.empty() ? std::filesystem::path(result).parent_path().string()
+                                        : directory);
     const std::string script = std::string(COLDTIP_SOURCE_DIR) + "/postprocess/coldtip_plot.py";
     std::vector<std::string> args = {"/usr/bin/python3", script, result};
     if (!directory.empty()) {

@@ -8,6 +8,7 @@
 #include "solver/components/Machine.hpp"
 #include "solver/cycle/SteadyStateSolver.hpp"
 #include "solver/input/CaseReader.hpp"
+#include "solver/output/OutputFile.hpp"
 #include "solver/output/ResultFile.hpp"
 
 namespace coldtip::cli {
@@ -27,25 +28,47 @@ struct RunOptions {
     bool quiet = false;
     bool json = false;
     bool verbose = false;
+    double checkpoint_every_s = 30.0;
 };
 
 int runCase(const RunOptions& opt, const RunInfo& info)
 {
+    watchInterrupts();
+    const std::string out_path = opt.output.empty() ? defaultResultPath(opt.case_path) : opt.output;
+    // Before any work: the result can be written and writing it loses nothing.
+    checkOutputFile(out_path, {opt.case_path});
     const CaseDescription d = input::readCaseFile(opt.case_path);
     Machine machine(d);
-    const std::string out_path = opt.output.empty() ? defaultResultPath(opt.case_path) : opt.output;
-    long period = 0;
-    std::vector<double> y0 = machine.initialState();
-    if (opt.resume && std::filesystem::exists(out_path)) {
-        SavedState saved = readSavedState(out_path, machine);
-        period = saved.period_index;
-        y0 = std::move(saved.state);
+    SteadyStart start = freshStart(0, machine.initialState());
+    if (opt.resume) {
+        if (std::filesystem::exists(out_path)) {
+            start = readSavedState(out_path, machine).start;
+            // A converged result has nothing to continue: solving again from its last cycle
+            // would start a new path and give another answer (within the tolerance, but
+            // not the one on file).
+            if (Hdf5Reader(out_path).stringAttribute("/summary", "status") == "converged") {
+                fmt::print(stderr, "note: {} is converged already: nothing to resume, the file "
+                                   "is left as it is\n", out_path);
+                return kExitSuccess;
+            }
+            if (!opt.quiet)
+                fmt::print(stderr, "resuming from {}: period {}, {} cycles and {:.1f} s so far{}\n",
+                           out_path, start.point.period_index, start.point.history_rows,
+                           start.point.wall_time_s,
+                           start.point.shooting.iteration > 0
+                               ? fmt::format(", at Newton iteration {}",
+                                             start.point.shooting.iteration)
+                               : std::string());
+        } else {
+            // Said even with --quiet: the user asked to continue something that is not there.
+            fmt::print(stderr, "note: {} does not exist: nothing to resume, starting from the "
+                               "initial state\n", out_path);
+        }
     }
 
     Progress progress(opt.quiet);
     CycleRunner runner(machine, CycleRunner::optionsFor(machine));
     const SteadyOptions o = steadyOptionsFor(d, opt.max_cycles);
-    watchInterrupts();
     auto last_save = std::chrono::steady_clock::now();
     auto save = [&](const SteadyOutcome& s, const std::string& status) {
         RunSummary summary = summarize(machine, s, status, s.wall_time_s);
@@ -57,15 +80,16 @@ int runCase(const RunOptions& opt, const RunInfo& info)
             const CycleMetrics& m = s.metrics;
             progress.cycle(s.history.back().cycle, m.cold_temperature, m.cooling_power,
                            m.heat_residual, o.heat_residual, s.wall_time_s);
-            // A checkpoint every 30 s: a killed run leaves the last complete cycle on disk.
+            // A checkpoint every --checkpoint-every seconds: a killed run leaves its last restart point on disk
+            // (RestartPoint.hpp), from which --resume takes the uninterrupted run's path.
             const auto now = std::chrono::steady_clock::now();
-            if (now - last_save > std::chrono::seconds(30)) {
+            if (now - last_save >= std::chrono::duration<double>(opt.checkpoint_every_s)) {
                 save(s, "running");
                 last_save = now;
             }
             return !interrupted();
         };
-    SteadyOutcome out = solveSteadyState(runner, period, y0, o, d.solver.steady.method, on_cycle);
+    SteadyOutcome out = solveSteadyState(runner, start, o, d.solver.steady.method, on_cycle);
     const SolverDiagnostics& report = out.diagnostics;
     progress.finish();
     if (opt.verbose)
@@ -80,11 +104,12 @@ int runCase(const RunOptions& opt, const RunInfo& info)
                                       report.newton_correction[i], mu));
         }
 
+    const bool stopped = !out.converged && !out.failed && (out.interrupted || interrupted());
     std::string status = out.converged ? "converged" : "not-converged";
-    if (!out.converged && !out.failed && !interrupted())
+    if (!out.converged && !out.failed && !stopped)
         out.failure = fmt::format("no periodic steady state after {} cycles: {}",
                                   out.history.size(), convergenceShortfall(out.metrics, o));
-    if (interrupted()) status = "interrupted";
+    if (stopped) status = "interrupted";
     if (out.failed) status = "failed";
     const RunSummary summary = save(out, status);
     if (opt.json) std::cout << toJson(summary).dump(2) << std::endl;
@@ -94,13 +119,19 @@ int runCase(const RunOptions& opt, const RunInfo& info)
                    out.history.size(), out.failure, out_path);
         return kExitSolverFailure;
     }
-    if (!out.converged && !interrupted()) {
+    if (stopped) {
+        progress.note(fmt::format("{}: interrupted after {} cycles ({:.1f} s); `--resume` "
+                                  "continues from {} (period {})",
+                                  d.name, out.history.size(), out.wall_time_s, out_path,
+                                  out.restart.period_index));
+        return kExitInterrupted;
+    }
+    if (!out.converged) {
         fmt::print(stderr, "error: {}\nthe last cycle is in {} (status not-converged)\n",
                    out.failure, out_path);
         return kExitSolverFailure;
     }
     progress.note(summaryLine(summary));
-    if (interrupted()) return kExitInterrupted;
     return kExitSuccess;
 }
 
@@ -115,6 +146,10 @@ void addRunCommand(CLI::App& app, Action& action, const CommandContext& context)
     run->add_option("--max-cycles", opt->max_cycles, "stop after this many cycles");
     run->add_flag("--resume", opt->resume, "continue from the state saved in the result file");
     run->add_flag("--quiet", opt->quiet, "no progress on stderr");
+    run->add_option("--checkpoint-every", opt->checkpoint_every_s,
+                    "seconds between checkpoints written to the result file (default 30; 0: "
+                    "after every cycle)")
+        ->check(CLI::NonNegativeNumber);
     run->add_flag("--json", opt->json, "print the summary as JSON on stdout");
     run->add_flag("--verbose", opt->verbose,
                   "print every Newton step with the dominant Floquet multipliers");

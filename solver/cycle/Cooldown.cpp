@@ -7,6 +7,7 @@
 
 #include "solver/cycle/CooldownAveraged.hpp"
 #include "solver/cycle/SteadyStateSolver.hpp"
+#include "solver/integrator/Interrupt.hpp"
 
 namespace coldtip {
 
@@ -126,6 +127,8 @@ CooldownOutcome plainCooldown(Machine& machine, const CooldownOptions& o,
             if (settled) out.status = "settled";
             if (last) break;
         }
+    } catch (const Interrupted&) {
+        out.status = "interrupted"; // within a cycle: the last complete one is kept
     } catch (const std::exception& e) {
         out.status = "failed";
         out.failure = e.what();
@@ -176,6 +179,7 @@ CooldownOutcome runCooldown(Machine& machine, const CooldownOptions& o,
             : integrateToSteadyState(runner, out.period_index, out.state, once, {});
     out.steady_cold_temperature = out.final_cycle.metrics.cold_temperature;
     out.steady_wall_time_s = secondsSince(t0);
+    if (out.final_cycle.interrupted) out.status = "interrupted";
     if (out.final_cycle.failed) {
         out.status = "failed";
         out.failure = "the steady-state check failed: " + out.final_cycle.failure;

@@ -1,6 +1,8 @@
 #include "solver/cycle/CooldownAveraged.hpp"
 
 #include <Eigen/Dense>
+
+#include "solver/integrator/Interrupt.hpp"
 #include <algorithm>
 #include <chrono>
 #include <cmath>
@@ -491,6 +493,7 @@ CooldownOutcome averagedCooldown(Machine& machine, const CooldownOptions& o,
     CooldownOutcome out;
     out.method = "accelerated";
     out.status = "time-limit";
+    out.state = y0; // until a macro step completes (an interruption in the first one)
     SlowEquation slow(machine, o);
     const IntegratorStats before = slow.runner().session().stats();
     ReportClock clock(o.report_at);
@@ -506,7 +509,12 @@ CooldownOutcome averagedCooldown(Machine& machine, const CooldownOptions& o,
         long confirmed_at = -kConfirmedSteps - 1; // macro step of the last fresh matrix
         bool more = true;
         while (more) {
-            more = macro.step(roots);
+            try {
+                more = macro.step(roots);
+            } catch (const Interrupted&) {
+                out.status = "interrupted"; // within a macro step: the last complete one is kept
+                break;
+            }
             for (int k : roots) clock.reached(static_cast<std::size_t>(k), macro.time());
             const CooldownRow row = rowOf(slow, macro.time(), macro.state(), macro.last());
             out.history.push_back(row);
@@ -544,6 +552,8 @@ CooldownOutcome averagedCooldown(Machine& machine, const CooldownOptions& o,
         out.largest_settle_change = macro.worstChange();
         out.unsettled_evaluations = macro.unsettled();
         out.largest_cold_offset = macro.largestColdOffset();
+    } catch (const Interrupted&) {
+        out.status = "interrupted"; // outside a macro step (a settle check, the first one)
     } catch (const std::exception& e) {
         out.status = "failed";
         out.failure = e.what();

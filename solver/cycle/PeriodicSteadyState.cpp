@@ -1,5 +1,7 @@
 #include "solver/cycle/PeriodicSteadyState.hpp"
 
+#include "solver/integrator/Interrupt.hpp"
+
 #include <algorithm>
 #include <chrono>
 #include <cmath>
@@ -152,36 +154,75 @@ double DistanceEstimate::add(std::span<const double> temperatures)
     return m_estimate = largest * B * B * (1.0 - mu) * muB * muB / (mu * (1.0 - muB) * (1.0 - muB));
 }
 
+SteadyStart freshStart(long period_index, std::span<const double> y0)
+{
+    SteadyStart s;
+    s.point.period_index = period_index;
+    s.point.state.assign(y0.begin(), y0.end());
+    return s;
+}
+
+SteadyOutcome outcomeAt(const SteadyStart& start)
+{
+    SteadyOutcome out;
+    out.history = start.history;
+    out.diagnostics = start.diagnostics;
+    out.state = start.point.state;
+    out.period_index = start.point.period_index;
+    out.restart = start.point;
+    if (!out.history.empty()) out.metrics = out.history.back().metrics;
+    out.wall_time_s = start.point.wall_time_s;
+    return out;
+}
+
 SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
                                      std::span<const double> y0, const SteadyOptions& options,
                                      const std::function<bool(const SteadyOutcome&)>& on_cycle)
 {
+    return integrateToSteadyState(runner, freshStart(period_index, y0), options, on_cycle);
+}
+
+SteadyOutcome integrateToSteadyState(CycleRunner& runner, const SteadyStart& start,
+                                     const SteadyOptions& options,
+                                     const std::function<bool(const SteadyOutcome&)>& on_cycle)
+{
     using Clock = std::chrono::steady_clock;
     const auto t0 = Clock::now();
-    SteadyOutcome out;
-    out.state.assign(y0.begin(), y0.end());
-    out.period_index = period_index;
-    runner.start(period_index, y0);
+    const IntegratorStats stats0 = runner.session().stats();
+    auto elapsed = [&] {
+        return start.point.wall_time_s + std::chrono::duration<double>(Clock::now() - t0).count();
+    };
+    SteadyOutcome out = outcomeAt(start);
     const Machine& machine = runner.machine();
     DistanceEstimate distance;
-    for (long n = 1; n <= options.max_cycles; ++n) {
-        CycleSamples samples;
-        CycleRecord record;
-        try {
-            record = runner.runCycle(&samples, options.samples_per_cycle);
-        } catch (const std::exception& e) {
-            out.failed = true;
-            out.failure = e.what();
-            break;
+    try {
+        runner.start(out.period_index, out.state);
+        // Counted over the whole run, like the history.
+        for (long n = static_cast<long>(out.history.size()) + 1; n <= options.max_cycles; ++n) {
+            CycleSamples samples;
+            CycleRecord record = runner.runCycle(&samples, options.samples_per_cycle);
+            out.converged = appendCycle(out, machine, std::move(record), std::move(samples),
+                                        runner.periodIndex(), elapsed(), &distance, options);
+            // Every cycle end is a restart point (the integrator restarted there).
+            RestartPoint& p = out.restart;
+            p.period_index = out.period_index;
+            p.state = out.state;
+            p.history_rows = out.history.size();
+            p.work = start.point.work + (runner.session().stats() - stats0);
+            p.wall_time_s = out.wall_time_s;
+            if (on_cycle && !on_cycle(out)) {
+                out.interrupted = true;
+                break;
+            }
+            if (out.converged) break;
         }
-        out.converged = appendCycle(out, machine, std::move(record), std::move(samples),
-                                    runner.periodIndex(),
-                                    std::chrono::duration<double>(Clock::now() - t0).count(),
-                                    &distance, options);
-        if (on_cycle && !on_cycle(out)) break;
-        if (out.converged) break;
+    } catch (const Interrupted&) {
+        out.interrupted = true;
+    } catch (const std::exception& e) {
+        out.failed = true;
+        out.failure = e.what();
     }
-    out.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();
+    out.wall_time_s = elapsed();
     return out;
 }
 

@@ -25,6 +25,7 @@
 
 #include "solver/cycle/CycleMetrics.hpp"
 #include "solver/cycle/CycleRunner.hpp"
+#include "solver/cycle/RestartPoint.hpp"
 
 namespace coldtip {
 
@@ -95,6 +96,7 @@ struct SolverDiagnostics {
 struct SteadyOutcome {
     bool converged = false;
     bool failed = false;
+    bool interrupted = false;         //!< stopped by a request (Interrupt.hpp or on_cycle)
     std::string failure;              //!< what stopped the integration, if it failed
     std::vector<HistoryRow> history;
     CycleRecord last;                 //!< the last complete cycle
@@ -102,9 +104,25 @@ struct SteadyOutcome {
     CycleMetrics metrics;             //!< of that cycle
     std::vector<double> state;        //!< state at the end of the last complete cycle
     long period_index = 0;            //!< period index at that state
-    double wall_time_s = 0.0;
+    double wall_time_s = 0.0;         //!< over every part of a resumed run
+    SolverDiagnostics diagnostics;
+    //! The latest point a continuation can start from along the same path (RestartPoint.hpp).
+    RestartPoint restart;
+};
+
+//! Where a solve starts: a restart point, and for a resumed run the history and
+//! diagnostics up to it (the outcome then counts cycles, effort and wall time over the
+//! whole run).
+struct SteadyStart {
+    RestartPoint point;
+    std::vector<HistoryRow> history;
     SolverDiagnostics diagnostics;
 };
+
+//! A fresh start from (period_index, y0).
+SteadyStart freshStart(long period_index, std::span<const double> y0);
+//! The outcome of a solve that has done nothing yet beyond `start`.
+SteadyOutcome outcomeAt(const SteadyStart& start);
 
 //! Cycle-mean enthalpy flow at every component boundary, in the order of
 //! boundaryEnthalpyNames().
@@ -128,6 +146,10 @@ std::string convergenceShortfall(const CycleMetrics& m, const SteadyOptions& o);
 //! checkpoints); returning false from it stops the run (interrupted).
 SteadyOutcome integrateToSteadyState(CycleRunner& runner, long period_index,
                                      std::span<const double> y0, const SteadyOptions& options,
+                                     const std::function<bool(const SteadyOutcome&)>& on_cycle);
+//! The same, continuing a run from `start`.
+SteadyOutcome integrateToSteadyState(CycleRunner& runner, const SteadyStart& start,
+                                     const SteadyOptions& options,
                                      const std::function<bool(const SteadyOutcome&)>& on_cycle);
 
 } // namespace coldtip

@@ -5,6 +5,8 @@
 #include <chrono>
 #include <cmath>
 
+#include "solver/integrator/Interrupt.hpp"
+
 namespace coldtip {
 
 ShootingVariables::ShootingVariables(const Network& network, double charge_pressure,
@@ -177,14 +179,23 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
                                  const ShootingOptions& shooting,
                                  const std::function<bool(const SteadyOutcome&)>& on_cycle)
 {
+    return shootToSteadyState(runner, freshStart(period_index, y0), options, shooting, on_cycle);
+}
+
+SteadyOutcome shootToSteadyState(CycleRunner& runner, const SteadyStart& start,
+                                 const SteadyOptions& options, const ShootingOptions& shooting,
+                                 const std::function<bool(const SteadyOutcome&)>& on_cycle)
+{
     using Clock = std::chrono::steady_clock;
     const auto t0 = Clock::now();
+    const IntegratorStats stats0 = runner.session().stats();
+    auto elapsed = [&] {
+        return start.point.wall_time_s + std::chrono::duration<double>(Clock::now() - t0).count();
+    };
     const Machine& machine = runner.machine();
     const ShootingVariables slow(machine.network(), machine.description().gas.charge_pressure,
                                  machine.massFlowScale());
-    SteadyOutcome out;
-    out.state.assign(y0.begin(), y0.end());
-    out.period_index = period_index;
+    SteadyOutcome out = outcomeAt(start);
     SolverDiagnostics& report = out.diagnostics;
     bool stop = false;
 
@@ -198,31 +209,57 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
         CycleRecord record = runner.runCycle(&samples, options.samples_per_cycle);
         ++report.cycle_equivalents;
         out.converged = appendCycle(out, machine, std::move(record), std::move(samples),
-                                    runner.periodIndex(),
-                                    std::chrono::duration<double>(Clock::now() - t0).count(),
+                                    runner.periodIndex(), elapsed(),
                                     newton_phase ? nullptr : &extrapolation, options);
-        if (on_cycle && !on_cycle(out)) stop = true;
+        if (on_cycle && !on_cycle(out)) stop = out.interrupted = true;
         return out.converged || stop ||
                static_cast<long>(out.history.size()) >= options.max_cycles;
     };
     auto fail = [&](const std::exception& e) {
         out.failed = true;
         out.failure = e.what();
-        out.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();
+        out.wall_time_s = elapsed();
         return out;
     };
+    // The integrator was just (re)started on out.state: a continuation from here with these
+    // variables follows the same path (RestartPoint.hpp).
+    auto markRestart = [&](const ShootingCheckpoint& c) {
+        RestartPoint& p = out.restart;
+        p.period_index = out.period_index;
+        p.state = out.state;
+        p.history_rows = out.history.size();
+        p.newton_steps = report.newton_residual.size();
+        p.newton_iterations = report.newton_iterations;
+        p.cycle_equivalents = report.cycle_equivalents;
+        p.work = start.point.work + (runner.session().stats() - stats0);
+        p.wall_time_s = elapsed();
+        p.shooting = c;
+    };
+    const ShootingCheckpoint& resumed = start.point.shooting;
 
     try {
-        runner.start(period_index, y0);
-        for (int w = 0; w < shooting.warmup_cycles; ++w)
-            if (plainCycle()) return out;
+        runner.start(out.period_index, out.state);
         int k = shooting.cycles_per_map;
-        newton_phase = true;
         double forcing = shooting.max_forcing;
         double previous_residual = 0.0;
         bool tighten = false;
         double accepted_correction = -1.0; // >= 0: the last correction met the test
-        for (int it = 1; it <= shooting.max_newton || accepted_correction >= 0.0; ++it) {
+        int first_iteration = 1;
+        if (resumed.iteration > 0) {
+            k = resumed.cycles_per_map;
+            forcing = resumed.forcing;
+            previous_residual = resumed.previous_residual;
+            tighten = resumed.tighten;
+            accepted_correction = resumed.accepted_correction;
+            first_iteration = resumed.iteration;
+        } else {
+            markRestart({});
+            for (int w = 0; w < shooting.warmup_cycles; ++w)
+                if (plainCycle()) return out;
+        }
+        newton_phase = true;
+        for (int it = first_iteration; it <= shooting.max_newton || accepted_correction >= 0.0;
+             ++it) {
             const long n0 = runner.periodIndex();
             const std::vector<double> y_start = out.state;
             const Vec x = toEigen(slow.extract(y_start));
@@ -243,7 +280,7 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
                     out.converged = steadyStateReached(out.metrics, options,
                                                        static_cast<long>(out.history.size()));
                     if (out.converged) {
-                        if (on_cycle && !on_cycle(out)) stop = true;
+                        if (on_cycle && !on_cycle(out)) stop = out.interrupted = true;
                         return out;
                     }
                     if (extra == 2 * k) break;
@@ -320,16 +357,21 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
             runner.start(n_end, y_next);
             out.state = y_next;
             out.period_index = n_end;
+            markRestart({it + 1, k, forcing, previous_residual, tighten, accepted_correction});
             if (stop) return out;
         }
-        // Newton budget spent: finish with plain cycles up to the cycle limit.
+        // Newton budget spent: finish with plain cycles up to the cycle limit, the distance
+        // extrapolated from these cycles alone (what a resumed run can reproduce).
         newton_phase = false;
+        extrapolation = DistanceEstimate{};
         while (static_cast<long>(out.history.size()) < options.max_cycles)
             if (plainCycle()) return out;
+    } catch (const Interrupted&) {
+        out.interrupted = true;
     } catch (const std::exception& e) {
         return fail(e);
     }
-    out.wall_time_s = std::chrono::duration<double>(Clock::now() - t0).count();
+    out.wall_time_s = elapsed();
     return out;
 }
 

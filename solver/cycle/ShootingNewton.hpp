@@ -94,5 +94,11 @@ SteadyOutcome shootToSteadyState(CycleRunner& runner, long period_index,
                                  std::span<const double> y0, const SteadyOptions& options,
                                  const ShootingOptions& shooting,
                                  const std::function<bool(const SteadyOutcome&)>& on_cycle);
+//! The same, continuing a run from `start`: from a restart point inside the Newton phase it
+//! takes the path the uninterrupted run took (RestartPoint.hpp). The outcome's `restart` is
+//! the latest such point.
+SteadyOutcome shootToSteadyState(CycleRunner& runner, const SteadyStart& start,
+                                 const SteadyOptions& options, const ShootingOptions& shooting,
+                                 const std::function<bool(const SteadyOutcome&)>& on_cycle);
 
 } // namespace coldtip

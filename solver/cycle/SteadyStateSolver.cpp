@@ -19,13 +19,20 @@ SteadyOutcome solveSteadyState(CycleRunner& runner, long period_index,
                                const std::string& method,
                                const std::function<bool(const SteadyOutcome&)>& on_cycle)
 {
+    return solveSteadyState(runner, freshStart(period_index, y0), options, method, on_cycle);
+}
+
+SteadyOutcome solveSteadyState(CycleRunner& runner, const SteadyStart& start,
+                               const SteadyOptions& options, const std::string& method,
+                               const std::function<bool(const SteadyOutcome&)>& on_cycle)
+{
     const IntegratorStats before = runner.session().stats();
     SteadyOutcome out =
         method == "plain"
-            ? integrateToSteadyState(runner, period_index, y0, options, on_cycle)
-            : shootToSteadyState(runner, period_index, y0, options, ShootingOptions{}, on_cycle);
+            ? integrateToSteadyState(runner, start, options, on_cycle)
+            : shootToSteadyState(runner, start, options, ShootingOptions{}, on_cycle);
     if (method == "plain") out.diagnostics.cycle_equivalents = static_cast<long>(out.history.size());
-    out.diagnostics.work = runner.session().stats() - before;
+    out.diagnostics.work = start.diagnostics.work + (runner.session().stats() - before);
     return out;
 }
 

@@ -21,5 +21,10 @@ SteadyOutcome solveSteadyState(CycleRunner& runner, long period_index,
                                std::span<const double> y0, const SteadyOptions& options,
                                const std::string& method,
                                const std::function<bool(const SteadyOutcome&)>& on_cycle = {});
+//! The same, continuing a run from `start` (a restart point read from a result file):
+//! cycles, effort and wall time are counted over the whole run.
+SteadyOutcome solveSteadyState(CycleRunner& runner, const SteadyStart& start,
+                               const SteadyOptions& options, const std::string& method,
+                               const std::function<bool(const SteadyOutcome&)>& on_cycle = {});
 
 } // namespace coldtip

@@ -1,5 +1,6 @@
 #include "solver/integrator/CvodeSession.hpp"
 
+#include "solver/integrator/Interrupt.hpp"
 #include "solver/integrator/SerialKernels.hpp"
 
 #include <algorithm>
@@ -251,6 +252,7 @@ int CvodeSession::rhs(sunrealtype t, N_Vector y, N_Vector ydot, void* self)
 {
     auto* s = static_cast<CvodeSession*>(self);
     try {
+        throwIfInterrupted();
         const auto yv = viewOf(y).first(static_cast<std::size_t>(s->m_n));
         s->m_network.checkPhysical(yv);
         const auto rates = mutableViewOf(ydot);
@@ -287,6 +289,7 @@ int CvodeSession::jacobian(sunrealtype t, N_Vector y, N_Vector, SUNMatrix J, voi
 {
     auto* s = static_cast<CvodeSession*>(self);
     try {
+        throwIfInterrupted();
         // CVODE zeroes the whole matrix, index arrays included, before calling us: the
         // cached pattern goes back in, then the values by slot.
         const SparsityPattern& p = s->m_network.pattern();

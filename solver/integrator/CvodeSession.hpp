@@ -15,7 +15,9 @@
 //! Exceptions thrown by the network inside a callback never cross into C: the callback
 //! stores them and returns +1 (a RecoverableStateError, e.g. a negative mass in a trial
 //! step: CVODE retries with a smaller step) or -1 (anything else); they are rethrown with
-//! their type after CVODE returns (as deal.II's SUNDIALS wrappers do).
+//! their type after CVODE returns (as deal.II's SUNDIALS wrappers do). A stop request
+//! (Interrupt.hpp) is checked on every right-hand side and Jacobian evaluation and leaves
+//! the same way, as an Interrupted exception: a run stops within one step.
 
 #include <exception>
 #include <memory>
@@ -82,6 +84,18 @@ inline IntegratorStats operator-(const IntegratorStats& a, const IntegratorStats
             a.error_test_failures - b.error_test_failures,
             a.nonlinear_iterations - b.nonlinear_iterations,
             a.nonlinear_failures - b.nonlinear_failures};
+}
+
+//! Effort of two parts added (a resumed run's parts).
+inline IntegratorStats operator+(const IntegratorStats& a, const IntegratorStats& b)
+{
+    return {a.steps + b.steps,
+            a.rhs_evaluations + b.rhs_evaluations,
+            a.jacobian_evaluations + b.jacobian_evaluations,
+            a.linear_setups + b.linear_setups,
+            a.error_test_failures + b.error_test_failures,
+            a.nonlinear_iterations + b.nonlinear_iterations,
+            a.nonlinear_failures + b.nonlinear_failures};
 }
 
 class CvodeSession {

@@ -22,49 +22,6 @@ double energyMismatch(const CooldownOutcome& out)
                : 0.0;
 }
 
-// Datasets and attributes into an existing file, in the layout Hdf5Writer makes.
-class Appender {
-public:
-    explicit Appender(const std::string& path)
-        : m_file(path, H5F_ACC_RDWR), m_group(m_file.createGroup("/cooldown"))
-    {
-    }
-    void write(const std::string& name, const std::vector<double>& v, std::size_t cols,
-               const std::string& units)
-    {
-        const hsize_t dims[2] = {cols > 0 ? v.size() / cols : 0, cols};
-        H5::DataSet ds = m_group.createDataSet(name, H5::PredType::NATIVE_DOUBLE,
-                                               H5::DataSpace(cols == 1 ? 1 : 2, dims));
-        if (!v.empty()) ds.write(v.data(), H5::PredType::NATIVE_DOUBLE);
-        H5::StrType st(H5::PredType::C_S1, units.size());
-        ds.createAttribute("units", st, H5::DataSpace(H5S_SCALAR)).write(st, units);
-    }
-    void strings(const std::string& name, const std::vector<std::string>& values)
-    {
-        std::vector<const char*> p;
-        for (const auto& s : values) p.push_back(s.c_str());
-        const hsize_t dims[1] = {values.size()};
-        H5::StrType st(H5::PredType::C_S1, H5T_VARIABLE);
-        H5::DataSet ds = m_group.createDataSet(name, st, H5::DataSpace(1, dims));
-        if (!p.empty()) ds.write(p.data(), st);
-    }
-    void attribute(const std::string& name, double v)
-    {
-        m_group.createAttribute(name, H5::PredType::NATIVE_DOUBLE, H5::DataSpace(H5S_SCALAR))
-            .write(H5::PredType::NATIVE_DOUBLE, &v);
-    }
-    void attribute(const std::string& name, const std::string& v)
-    {
-        const std::string s = v.empty() ? " " : v;
-        H5::StrType st(H5::PredType::C_S1, s.size());
-        m_group.createAttribute(name, st, H5::DataSpace(H5S_SCALAR)).write(st, s);
-    }
-
-private:
-    H5::H5File m_file;
-    H5::Group m_group;
-};
-
 std::string unitsOf(const std::string& key)
 {
     for (const auto& [suffix, unit] :
@@ -142,16 +99,18 @@ nlohmann::json cooldownJson(const Machine& machine, const CooldownOutcome& out)
 void writeCooldownResult(const std::string& path, const Machine& machine,
                          const CooldownOutcome& out, const RunInfo& info)
 {
-    // The run result first, under a temporary name; /cooldown added; then moved into place.
-    const std::string staging = path + ".cooldown";
+    // The run result of the final cycle with /cooldown added, written as one file and moved
+    // into place like every result file (a kill leaves the previous file or this one).
     const SteadyOutcome& last = out.final_cycle;
     RunSummary summary = summarize(machine, last, last.converged ? "converged" : "not-converged",
                                    last.wall_time_s);
     summary.result_file = path;
-    writeRunResult(staging, machine, last, summary, info);
-    try {
-        H5::Exception::dontPrint();
-        Appender a(staging);
+    writeRunResult(path, machine, last, summary, info, [&](Hdf5Writer& w) {
+        auto write = [&](const std::string& name, const std::vector<double>& v, std::size_t cols,
+                         const std::string& units) {
+            const std::size_t rows = cols > 0 ? v.size() / cols : 0;
+            w.write("/cooldown/" + name, v, rows, cols, units);
+        };
         std::vector<double> t, Tc, Tb, gross, cooling, net, pv, load, integral;
         for (const CooldownRow& r : out.history) {
             t.push_back(r.time);
@@ -164,39 +123,34 @@ void writeCooldownResult(const std::string& path, const Machine& machine,
             load.insert(load.end(), r.loads.begin(), r.loads.end());
             integral.push_back(r.net_cooling_integral);
         }
-        a.write("time", t, 1, "s");
-        a.write("cold_temperature", Tc, 1, "K");
-        a.write("body_temperature", Tb, out.body_names.size(), "K");
-        a.strings("body_name", out.body_names);
-        a.write("gross_cooling_power", gross, 1, "W");
-        a.write("cooling_power", cooling, 1, "W");
-        a.write("net_cooling_power", net, 1, "W");
-        a.write("pv_power", pv, 1, "W");
-        a.write("load", load, std::max<std::size_t>(1, out.load_names.size()), "W");
-        a.strings("load_name", out.load_names);
-        a.write("net_cooling_integral", integral, 1, "J");
+        write("time", t, 1, "s");
+        write("cold_temperature", Tc, 1, "K");
+        write("body_temperature", Tb, out.body_names.size(), "K");
+        w.writeStrings("/cooldown/body_name", out.body_names);
+        write("gross_cooling_power", gross, 1, "W");
+        write("cooling_power", cooling, 1, "W");
+        write("net_cooling_power", net, 1, "W");
+        write("pv_power", pv, 1, "W");
+        write("load", load, std::max<std::size_t>(1, out.load_names.size()), "W");
+        w.writeStrings("/cooldown/load_name", out.load_names);
+        write("net_cooling_integral", integral, 1, "J");
         std::vector<double> report_T, report_t;
         for (const CooldownReport& r : out.reports) {
             report_T.push_back(r.temperature);
             report_t.push_back(r.time);
         }
-        a.write("report_temperature", report_T, 1, "K");
-        a.write("report_time", report_t, 1, "s");
-        a.attribute("method", out.method);
-        a.attribute("status", out.status);
-        a.attribute("failure", out.failure);
+        write("report_temperature", report_T, 1, "K");
+        write("report_time", report_t, 1, "s");
+        w.attribute("/cooldown", "method", out.method);
+        w.attribute("/cooldown", "status", out.status);
+        w.attribute("/cooldown", "failure", out.failure);
         std::string units;
         for (const SummaryValue& v : cooldownValues(out)) {
-            a.attribute(v.key, v.value);
+            w.attribute("/cooldown", v.key, v.value);
             units += v.key + ":" + unitsOf(v.key) + ";";
         }
-        a.attribute("units", units);
-    } catch (const H5::Exception& e) {
-        std::filesystem::remove(staging);
-        throw std::runtime_error(fmt::format("{}: cannot write /cooldown: {}", path,
-                                             e.getDetailMsg()));
-    }
-    std::filesystem::rename(staging, path);
+        w.attribute("/cooldown", "units", units);
+    });
 }
 
 } // namespace coldtip

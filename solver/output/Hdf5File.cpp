@@ -1,7 +1,12 @@
 #include "solver/output/Hdf5File.hpp"
 
+#include <cerrno>
 #include <cstdio>
+#include <cstring>
+#include <fcntl.h>
+#include <filesystem>
 #include <stdexcept>
+#include <unistd.h>
 
 namespace coldtip {
 
@@ -18,12 +23,46 @@ const std::string& quiet(const std::string& path)
     H5::Exception::dontPrint();
     return path;
 }
+H5::H5File createFile(const std::string& path, const std::string& partial)
+{
+    try {
+        return H5::H5File(quiet(partial), H5F_ACC_TRUNC);
+    } catch (const H5::Exception& e) {
+        throw std::runtime_error(path + ": cannot write " + partial + ": " + e.getDetailMsg());
+    }
+}
+//! Push a file's (or folder's) data to the disk: a rename is only as durable as what it
+//! names (POSIX fsync; the usual write-temporary, fsync, rename, fsync-folder sequence).
+void syncToDisk(const std::string& path, const std::string& for_file)
+{
+    const int fd = ::open(path.c_str(), O_RDONLY);
+    if (fd < 0 || ::fsync(fd) != 0) {
+        const std::string why = std::strerror(errno);
+        if (fd >= 0) ::close(fd);
+        throw std::runtime_error(for_file + ": cannot sync " + path + " to disk: " + why);
+    }
+    ::close(fd);
+}
 } // namespace
 
+const char* const kWrittenByAttribute = "written_by";
+
+std::string partialPathOf(const std::string& path) { return path + ".partial"; }
+
 Hdf5Writer::Hdf5Writer(std::string path)
-    : m_path(std::move(path)), m_partial(m_path + ".partial"),
-      m_file(quiet(m_partial), H5F_ACC_TRUNC)
+    : m_path(std::move(path)), m_partial(partialPathOf(m_path)), m_file(createFile(m_path, m_partial))
 {
+    // The mark by which a later run knows the file as coldtip's own (OutputFile.hpp).
+    try {
+        attribute("/", kWrittenByAttribute, std::string("coldtip ") + COLDTIP_VERSION);
+    } catch (const H5::Exception& e) {
+        try {
+            m_file.close();
+        } catch (const H5::Exception&) {
+        }
+        std::remove(m_partial.c_str());
+        throw std::runtime_error(m_path + ": cannot write " + m_partial + ": " + e.getDetailMsg());
+    }
 }
 
 Hdf5Writer::~Hdf5Writer()
@@ -120,11 +159,19 @@ void Hdf5Writer::attribute(const std::string& path, const std::string& name,
 
 void Hdf5Writer::commit()
 {
-    m_file.flush(H5F_SCOPE_GLOBAL);
-    m_file.close();
+    try {
+        m_file.flush(H5F_SCOPE_GLOBAL);
+        m_file.close();
+    } catch (const H5::Exception& e) {
+        throw std::runtime_error(m_path + ": cannot write " + m_partial + ": " + e.getDetailMsg());
+    }
+    syncToDisk(m_partial, m_path);
     if (std::rename(m_partial.c_str(), m_path.c_str()) != 0)
-        throw std::runtime_error("cannot move " + m_partial + " to " + m_path);
+        throw std::runtime_error("cannot move " + m_partial + " to " + m_path + ": " +
+                                 std::strerror(errno));
     m_committed = true;
+    const std::filesystem::path folder = std::filesystem::path(m_path).parent_path();
+    syncToDisk(folder.empty() ? std::string(".") : folder.string(), m_path);
 }
 
 Hdf5Reader::Hdf5Reader(const std::string& path) : m_file(quiet(path), H5F_ACC_RDONLY) {}
@@ -142,6 +189,11 @@ bool Hdf5Reader::exists(const std::string& path) const
         start = slash + 1;
     }
     return true;
+}
+
+bool Hdf5Reader::hasAttribute(const std::string& object, const std::string& name) const
+{
+    return exists(object) && m_file.openGroup(object).attrExists(name);
 }
 
 std::vector<std::size_t> Hdf5Reader::shape(const std::string& path) const

@@ -2,14 +2,23 @@
 //! \file Hdf5File.hpp
 //! A small writer over the HDF5 C++ API: groups by path, double datasets of rank 1 or 2 with
 //! a `units` attribute on every one, string datasets, and scalar attributes. Files are
-//! written whole to `PATH.partial` and renamed over PATH on commit(), so a reader (or a kill
-//! at any moment) only ever sees the last complete file.
+//! written whole to `PATH.partial` in the same folder, synced to disk and renamed over PATH
+//! on commit() (then the folder is synced), so a reader (or a kill at any moment, SIGKILL
+//! included) only ever sees the last complete file. A `PATH.partial` left by a killed
+//! write is never read as a result; the next command writing PATH removes it
+//! (checkOutputFile, OutputFile.hpp). Every file carries the root attribute `written_by`
+//! ("coldtip VERSION"), by which coldtip knows a file it may overwrite.
 
 #include <H5Cpp.h>
 #include <string>
 #include <vector>
 
 namespace coldtip {
+
+//! Root attribute naming the writer of every file coldtip writes.
+extern const char* const kWrittenByAttribute;
+//! Where a file is written before it is moved to `path`.
+std::string partialPathOf(const std::string& path);
 
 class Hdf5Writer {
 public:
@@ -32,7 +41,8 @@ public:
     void attribute(const std::string& object, const std::string& name, long value);
     void attribute(const std::string& object, const std::string& name, const std::string& value);
 
-    //! Close and atomically move the file into place.
+    //! Close, sync and atomically move the file into place (std::runtime_error naming the
+    //! path if that fails).
     void commit();
 
 private:
@@ -57,6 +67,7 @@ public:
     long longAttribute(const std::string& object, const std::string& name) const;
     std::vector<std::string> strings(const std::string& path) const;
     bool exists(const std::string& path) const;
+    bool hasAttribute(const std::string& object, const std::string& name) const;
 
 private:
     H5::H5File m_file;

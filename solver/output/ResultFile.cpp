@@ -2,9 +2,13 @@
 
 #include <algorithm>
 #include <cmath>
+#include <complex>
+#include <cstdint>
+#include <fmt/format.h>
 #include <stdexcept>
 
 #include "solver/cycle/Harmonics.hpp"
+#include "solver/input/InputError.hpp"
 #include "solver/output/Hdf5File.hpp"
 
 namespace coldtip {
@@ -307,8 +311,65 @@ void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info)
     w.attribute("/case", "command_line", info.command_line);
 }
 
-void writeRunResult(const std::string& path, const Machine& machine, const SteadyOutcome& out,
-                    const RunSummary& summary, const RunInfo& info)
+namespace {
+
+//! Integrator effort as attributes of `group` (/solver: the run's; /state: up to the
+//! restart point).
+void writeEffort(Hdf5Writer& w, const std::string& group, const IntegratorStats& work)
+{
+    w.attribute(group, "steps", work.steps);
+    w.attribute(group, "rhs_evaluations", work.rhs_evaluations);
+    w.attribute(group, "jacobian_evaluations", work.jacobian_evaluations);
+    w.attribute(group, "linear_setups", work.linear_setups);
+    w.attribute(group, "error_test_failures", work.error_test_failures);
+    w.attribute(group, "nonlinear_iterations", work.nonlinear_iterations);
+    w.attribute(group, "nonlinear_failures", work.nonlinear_failures);
+}
+
+//! /state: where --resume continues. A finished run (converged, failed) saves its last
+//! cycle's end as a fresh start (a warm start); an unfinished one (running, interrupted,
+//! not converged) its restart point, from which the continuation follows the path the run
+//! would have taken (RestartPoint.hpp), with the counts up to there.
+void writeRestartState(Hdf5Writer& w, const Machine& machine, const SteadyOutcome& out)
+{
+    RestartPoint p = out.restart;
+    if (out.converged || out.failed || p.state.empty()) {
+        p = RestartPoint{};
+        p.period_index = out.period_index;
+        p.state = out.state;
+        p.history_rows = out.history.size();
+        p.newton_steps = out.diagnostics.newton_residual.size();
+        p.newton_iterations = out.diagnostics.newton_iterations;
+        p.cycle_equivalents = out.diagnostics.cycle_equivalents;
+        p.work = out.diagnostics.work;
+        p.wall_time_s = out.wall_time_s;
+    }
+    std::vector<std::string> names;
+    for (int k = 0; k < machine.network().size(); ++k) names.push_back(machine.network().stateName(k));
+    w.write("/state/y", p.state, "SI (see name)");
+    w.writeStrings("/state/name", names);
+    w.attribute("/state", "period_index", p.period_index);
+    w.attribute("/state", "cycles", static_cast<long>(out.history.size()));
+    w.attribute("/state", "case_hash", caseHash(machine.description()));
+    w.attribute("/state", "tool_version", std::string("coldtip ") + COLDTIP_VERSION);
+    w.attribute("/state", "history_rows", static_cast<long>(p.history_rows));
+    w.attribute("/state", "newton_steps", static_cast<long>(p.newton_steps));
+    w.attribute("/state", "newton_iterations", static_cast<long>(p.newton_iterations));
+    w.attribute("/state", "cycle_equivalents", p.cycle_equivalents);
+    w.attribute("/state", "wall_time_s", p.wall_time_s);
+    writeEffort(w, "/state", p.work);
+    const ShootingCheckpoint& c = p.shooting;
+    w.attribute("/state", "newton_iteration", static_cast<long>(c.iteration));
+    w.attribute("/state", "periods_per_map", static_cast<long>(c.cycles_per_map));
+    w.attribute("/state", "krylov_forcing", c.forcing);
+    w.attribute("/state", "previous_residual", c.previous_residual);
+    w.attribute("/state", "tighten", static_cast<long>(c.tighten));
+    w.attribute("/state", "accepted_correction", c.accepted_correction);
+}
+
+void writeRunResultFile(const std::string& path, const Machine& machine,
+                        const SteadyOutcome& out, const RunSummary& summary, const RunInfo& info,
+                        const std::function<void(Hdf5Writer&)>& more)
 {
     Hdf5Writer w(path);
     const CaseDescription& d = machine.description();
@@ -346,11 +407,7 @@ void writeRunResult(const std::string& path, const Machine& machine, const Stead
 
     const SolverDiagnostics& dg = out.diagnostics;
     w.attribute("/solver", "cycle_equivalents", dg.cycle_equivalents);
-    w.attribute("/solver", "steps", dg.work.steps);
-    w.attribute("/solver", "rhs_evaluations", dg.work.rhs_evaluations);
-    w.attribute("/solver", "jacobian_evaluations", dg.work.jacobian_evaluations);
-    w.attribute("/solver", "error_test_failures", dg.work.error_test_failures);
-    w.attribute("/solver", "nonlinear_failures", dg.work.nonlinear_failures);
+    writeEffort(w, "/solver", dg.work);
     w.attribute("/solver", "method", d.solver.steady.method);
     if (dg.newton_iterations > 0) {
         // Newton steps and the dominant Floquet multipliers (modulus, argument) per step.
@@ -371,36 +428,195 @@ void writeRunResult(const std::string& path, const Machine& machine, const Stead
         w.write("/solver/newton/floquet_modulus", modulus, dg.floquet.size(), width, "1");
         w.write("/solver/newton/floquet_argument", argument, dg.floquet.size(), width, "deg");
     }
-    std::vector<std::string> names;
-    for (int k = 0; k < machine.network().size(); ++k) names.push_back(machine.network().stateName(k));
-    w.write("/state/y", out.state, "SI (see name)");
-    w.writeStrings("/state/name", names);
-    w.attribute("/state", "period_index", out.period_index);
-    w.attribute("/state", "cycles", static_cast<long>(out.history.size()));
+    writeRestartState(w, machine, out);
+    if (more) more(w);
     w.commit();
 }
 
+} // namespace
+
+void writeRunResult(const std::string& path, const Machine& machine, const SteadyOutcome& out,
+                    const RunSummary& summary, const RunInfo& info,
+                    const std::function<void(Hdf5Writer&)>& more)
+{
+    try {
+        writeRunResultFile(path, machine, out, summary, info, more);
+    } catch (const H5::Exception& e) {
+        throw std::runtime_error(path + ": cannot write the result: " + e.getDetailMsg());
+    }
+}
+
+std::string caseHash(const CaseDescription& d)
+{
+    // FNV-1a, 64 bits (Fowler, Noll and Vo; IETF draft-eastlake-fnv): stable across builds
+    // and platforms, unlike std::hash.
+    std::uint64_t h = 1469598103934665603ull;
+    for (unsigned char c : d.source_text) {
+        h ^= c;
+        h *= 1099511628211ull;
+    }
+    return fmt::format("fnv1a64:{:016x}", h);
+}
+
+namespace {
+
+//! A resume refused: bad input (exit 1), naming the file.
+[[noreturn]] void refuseResume(const std::string& path, const std::string& problem,
+                               const std::string& expected)
+{
+    throw input::InputError({path, 0, 0, ""}, "cannot resume from it: " + problem, expected);
+}
+
+std::vector<HistoryRow> readHistory(const Hdf5Reader& r, std::size_t rows)
+{
+    std::vector<HistoryRow> h;
+    if (rows == 0) return h;
+    auto column = [&](const char* name) {
+        std::vector<double> v = r.doubles(std::string("/history/") + name);
+        if (v.size() < rows)
+            throw std::runtime_error(std::string("/history/") + name + " is shorter than the "
+                                     "saved history");
+        return v;
+    };
+    const auto cycle = column("cycle"), time = column("time"), Tc = column("cold_temperature"),
+               Qc = column("cooling_power"), gross = column("gross_cooling_power"),
+               pv = column("pv_power"), err = column("energy_balance_error"),
+               res = column("steady_residual"), dT = column("max_temperature_change"),
+               distance = column("distance_estimate"), steps = column("steps"),
+               rhs = column("rhs_evaluations"), jac = column("jacobian_evaluations"),
+               wall = column("wall_time");
+    const std::vector<double> boundary = r.doubles("/history/boundary_enthalpy_flow");
+    const std::size_t width = cycle.empty() ? 0 : boundary.size() / cycle.size();
+    for (std::size_t i = 0; i < rows; ++i) {
+        HistoryRow row;
+        row.cycle = static_cast<long>(cycle[i]);
+        row.time = time[i];
+        row.metrics.cold_temperature = Tc[i];
+        row.metrics.cooling_power = Qc[i];
+        row.metrics.gross_cooling = gross[i];
+        row.metrics.pv_power = pv[i];
+        row.metrics.energy_balance_error = err[i];
+        row.metrics.heat_residual = res[i];
+        row.metrics.max_temperature_change = dT[i];
+        row.metrics.distance_estimate = distance[i];
+        row.work.steps = static_cast<long>(steps[i]);
+        row.work.rhs_evaluations = static_cast<long>(rhs[i]);
+        row.work.jacobian_evaluations = static_cast<long>(jac[i]);
+        row.wall_time_s = wall[i];
+        row.boundary_enthalpy.assign(boundary.begin() + i * width,
+                                     boundary.begin() + (i + 1) * width);
+        h.push_back(std::move(row));
+    }
+    return h;
+}
+
+SolverDiagnostics readDiagnostics(const Hdf5Reader& r, const RestartPoint& p)
+{
+    SolverDiagnostics d;
+    d.cycle_equivalents = p.cycle_equivalents;
+    d.work = p.work;
+    d.newton_iterations = p.newton_iterations;
+    const std::size_t n = p.newton_steps;
+    if (n == 0) return d;
+    auto first = [&](const char* name) {
+        std::vector<double> v = r.doubles(std::string("/solver/newton/") + name);
+        if (v.size() < n) throw std::runtime_error(std::string("/solver/newton/") + name +
+                                                   " is shorter than the saved Newton steps");
+        return v;
+    };
+    const auto res = first("residual"), krylov = first("krylov_iterations"),
+               corr = first("correction"), k = first("periods_per_map");
+    d.newton_residual.assign(res.begin(), res.begin() + n);
+    d.newton_correction.assign(corr.begin(), corr.begin() + n);
+    for (std::size_t i = 0; i < n; ++i) {
+        d.krylov_iterations.push_back(static_cast<int>(krylov[i]));
+        d.periods_per_map.push_back(static_cast<int>(k[i]));
+    }
+    const auto modulus = r.doubles("/solver/newton/floquet_modulus");
+    const auto argument = r.doubles("/solver/newton/floquet_argument");
+    const std::size_t rows = res.size(), width = rows ? modulus.size() / rows : 0;
+    for (std::size_t i = 0; i < n; ++i) {
+        std::vector<std::complex<double>> mu;
+        for (std::size_t j = 0; j < width && modulus[i * width + j] > 0.0; ++j)
+            mu.push_back(std::polar(modulus[i * width + j], argument[i * width + j] * M_PI / 180.0));
+        d.floquet.push_back(std::move(mu));
+    }
+    return d;
+}
+
+} // namespace
+
 SavedState readSavedState(const std::string& path, const Machine& machine)
 {
+    const Network& net = machine.network();
     try {
         Hdf5Reader r(path);
         SavedState s;
+        if (!r.exists("/state/y"))
+            refuseResume(path, "it holds no saved state", "a result file of `coldtip run`");
+        // Tied to its case and to the tool version: a state of another case with the same
+        // network would start a different problem from a foreign state.
+        auto attribute = [&](const char* name) {
+            return r.hasAttribute("/state", name) ? r.stringAttribute("/state", name)
+                                                  : std::string();
+        };
+        const std::string version = attribute("tool_version"), hash = attribute("case_hash");
+        const std::string this_version = std::string("coldtip ") + COLDTIP_VERSION;
+        if (hash.empty())
+            refuseResume(path, "its state is not tied to a case (written by an older coldtip)",
+                         "a result written by " + this_version + " for this case");
+        if (version != this_version)
+            refuseResume(path, "it was written by " + version + ", this is " + this_version,
+                         "a result written by " + this_version + " for this case");
+        if (hash != caseHash(machine.description()))
+            refuseResume(path,
+                         "it was computed for another case (its case text differs from " +
+                             machine.description().source_path + ")",
+                         "the result of this case file, or another output file (-o)");
         s.state = r.doubles("/state/y");
         s.names = r.strings("/state/name");
         s.period_index = r.longAttribute("/state", "period_index");
-        const Network& net = machine.network();
         if (static_cast<int>(s.state.size()) != net.size())
-            throw std::runtime_error("its state has " + std::to_string(s.state.size()) +
-                                     " variables, the case has " + std::to_string(net.size()));
+            refuseResume(path, "its state has " + std::to_string(s.state.size()) +
+                                   " variables, the case has " + std::to_string(net.size()),
+                         "a result of this case");
         for (int k = 0; k < net.size(); ++k)
             if (s.names[k] != net.stateName(k))
-                throw std::runtime_error("its state variable " + std::to_string(k) + " is " +
-                                         s.names[k] + ", the case's is " + net.stateName(k));
+                refuseResume(path, "its state variable " + std::to_string(k) + " is " +
+                                       s.names[k] + ", the case's is " + net.stateName(k),
+                             "a result of this case");
+        RestartPoint& p = s.start.point;
+        p.period_index = s.period_index;
+        p.state = s.state;
+        p.history_rows = static_cast<std::size_t>(r.longAttribute("/state", "history_rows"));
+        p.newton_steps = static_cast<std::size_t>(r.longAttribute("/state", "newton_steps"));
+        p.newton_iterations = static_cast<int>(r.longAttribute("/state", "newton_iterations"));
+        p.cycle_equivalents = r.longAttribute("/state", "cycle_equivalents");
+        p.wall_time_s = r.doubleAttribute("/state", "wall_time_s");
+        p.work.steps = r.longAttribute("/state", "steps");
+        p.work.rhs_evaluations = r.longAttribute("/state", "rhs_evaluations");
+        p.work.jacobian_evaluations = r.longAttribute("/state", "jacobian_evaluations");
+        p.work.linear_setups = r.longAttribute("/state", "linear_setups");
+        p.work.error_test_failures = r.longAttribute("/state", "error_test_failures");
+        p.work.nonlinear_iterations = r.longAttribute("/state", "nonlinear_iterations");
+        p.work.nonlinear_failures = r.longAttribute("/state", "nonlinear_failures");
+        ShootingCheckpoint& c = p.shooting;
+        c.iteration = static_cast<int>(r.longAttribute("/state", "newton_iteration"));
+        c.cycles_per_map = static_cast<int>(r.longAttribute("/state", "periods_per_map"));
+        c.forcing = r.doubleAttribute("/state", "krylov_forcing");
+        c.previous_residual = r.doubleAttribute("/state", "previous_residual");
+        c.tighten = r.longAttribute("/state", "tighten") != 0;
+        c.accepted_correction = r.doubleAttribute("/state", "accepted_correction");
+        s.start.history = readHistory(r, p.history_rows);
+        s.start.diagnostics = readDiagnostics(r, p);
         return s;
+    } catch (const input::InputError&) {
+        throw;
     } catch (const H5::Exception& e) {
-        throw std::runtime_error(path + ": cannot read a saved state: " + e.getDetailMsg());
-    } catch (const std::runtime_error& e) {
-        throw std::runtime_error(path + ": cannot resume from it: " + e.what());
+        refuseResume(path, "cannot read its saved state: " + e.getDetailMsg(),
+                     "a readable result file of `coldtip run`");
+    } catch (const std::exception& e) {
+        refuseResume(path, e.what(), "a readable result file of `coldtip run`");
     }
 }
 

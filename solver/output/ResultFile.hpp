@@ -6,6 +6,7 @@
 //! Written whole and moved into place, so a kill leaves the previous complete file.
 
 #include <initializer_list>
+#include <functional>
 #include <string>
 
 #include "solver/output/RunSummary.hpp"
@@ -32,16 +33,26 @@ void writeAlongX(Hdf5Writer& w, const std::string& group, const std::vector<doub
 //! /case: the case text and path, its name, the tool version and the command line.
 void writeCaseText(Hdf5Writer& w, const Machine& machine, const RunInfo& info);
 
+//! Written whole, synced and moved into place (Hdf5File.hpp); `more` may add groups before
+//! that (the cooldown's). Throws std::runtime_error naming the path if it cannot be written.
 void writeRunResult(const std::string& path, const Machine& machine, const SteadyOutcome& outcome,
-                    const RunSummary& summary, const RunInfo& info);
+                    const RunSummary& summary, const RunInfo& info,
+                    const std::function<void(Hdf5Writer&)>& more = {});
+
+//! The case a result belongs to: a hash of its text (stored in /state as `case_hash`, with
+//! `tool_version`, so that --resume refuses another case's or another version's state).
+std::string caseHash(const CaseDescription& d);
 
 //! State saved in a result file: the period index and the state vector at its start.
 struct SavedState {
     long period_index = 0;
     std::vector<double> state;
     std::vector<std::string> names;
+    //! The restart point with the run's history and diagnostics up to it.
+    SteadyStart start;
 };
-//! Reads /state; throws std::runtime_error naming the file if it has none or it does not fit.
+//! Reads /state; throws input::InputError naming the file if it has none, cannot be read,
+//! or belongs to another case or tool version (bad input: exit 1).
 SavedState readSavedState(const std::string& path, const Machine& machine);
 
 } // namespace coldtip
